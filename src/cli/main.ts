@@ -1,0 +1,40 @@
+#!/usr/bin/env node
+/**
+ * The `polewright` command: builds the program from the command modules and maps failures to
+ * exit codes (0 success, 2 bad input or usage, 1 internal error). No stack trace for user mistakes.
+ */
+import { CommanderError } from 'commander';
+import { buildProgram } from './program.js';
+import { isInputError } from '../core/InputError.js';
+
+async function main(argv: string[]): Promise<number> {
+  const program = buildProgram();
+  try {
+    await program.parseAsync(argv);
+    return 0;
+  } catch (error) {
+    if (error instanceof CommanderError) {
+      // Commander has already printed its message; help and version are successes.
+      return error.exitCode === 0 ? 0 : 2;
+    }
+    if (isInputError(error)) {
+      process.stderr.write(`polewright: ${error.message}\n`);
+      return 2;
+    }
+    const detail = error instanceof Error ? error.message : String(error);
+    process.stderr.write(`polewright: internal error: ${detail}\n`);
+    if (process.env.POLEWRIGHT_DEBUG && error instanceof Error && error.stack) {
+      process.stderr.write(`${error.stack}\n`);
+    }
+    return 1;
+  }
+}
+
+main(process.argv).then(
+  (code) => {
+    process.exitCode = code;
+  },
+  () => {
+    process.exitCode = 1;
+  },
+);

@@ -1,0 +1,47 @@
+/**
+ * FermionModel: the one internal form every model file (explicit, lattice preset, impurity preset)
+ * is turned into. H = Σ_ij T_ij a_i† a_j + ½ Σ_ijkl V_ijkl a_i† a_j† a_l a_k (physicists' order),
+ * modes numbered as in ../shared/CONVENTIONS.md (presets: all spin-up modes, then all spin-down).
+ */
+
+/** A dense complex n×n matrix, row-major: entry (i, j) at index i*n + j. */
+export interface ComplexMatrix {
+  readonly n: number;
+  readonly re: Float64Array;
+  readonly im: Float64Array;
+}
+
+/** One two-body coefficient V_ijkl = <ij|v|kl>; repeated (i,j,k,l) entries are already summed. */
+export interface TwoBodyTerm {
+  readonly i: number;
+  readonly j: number;
+  readonly k: number;
+  readonly l: number;
+  readonly re: number;
+  readonly im: number;
+}
+
+export interface FrequencyGrid {
+  readonly from: number;
+  readonly to: number;
+  readonly points: number;
+}
+
+export interface FermionModel {
+  readonly name: string;
+  readonly modes: number;
+  readonly electrons: number;
+  /** Presets only: the mode indices of each spin block (up block first, then down). */
+  readonly spinBlocks?: { readonly up: readonly number[]; readonly down: readonly number[] };
+  /** Presets only: number of up minus down electrons of the sector to solve in. */
+  readonly spinPolarization?: number;
+  /** T, chemical potential included. Hermitian. */
+  readonly oneBody: ComplexMatrix;
+  /** The part of T that the split moves into B (zero matrix when nothing is moved); A = T − this. */
+  readonly oneBodyInB: ComplexMatrix;
+  /** V terms; the two-body part always belongs to B. */
+  readonly twoBody: readonly TwoBodyTerm[];
+  /** η > 0. */
+  readonly broadening: number;
+  readonly grid: FrequencyGrid;
+}
