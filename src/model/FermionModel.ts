@@ -27,8 +27,21 @@ export interface FrequencyGrid {
   readonly points: number;
 }
 
+/** Which model-file form a model came from, with the few facts a summary needs. */
+export type ModelForm =
+  | { readonly kind: 'explicit' }
+  | {
+      readonly kind: 'hubbard';
+      readonly shape: 'chain' | 'ring' | 'grid';
+      /** [L] for chain and ring, [Lx, Ly] for grid. */
+      readonly size: readonly number[];
+    }
+  | { readonly kind: 'impurity'; readonly bathLevels: number };
+
 export interface FermionModel {
   readonly name: string;
+  /** The model-file form this model was read from (absent for models built in code). */
+  readonly form?: ModelForm;
   readonly modes: number;
   readonly electrons: number;
   /** Presets only: the mode indices of each spin block (up block first, then down). */

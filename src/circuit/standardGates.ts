@@ -1,0 +1,119 @@
+/**
+ * The OpenQASM 3 standard gate library (stdgates.inc) plus the built-ins U and gphase, each reduced
+ * to a canonical form: some leading control qubits and a base action (a 2×2 unitary, a swap, or a
+ * global phase), global phases exactly as the specification's definitions give them.
+ */
+
+/** A 2×2 complex matrix [[a, b], [c, d]] as [aRe, aIm, bRe, bIm, cRe, cIm, dRe, dIm]. */
+export type Matrix2 = readonly [number, number, number, number, number, number, number, number];
+
+export type BaseAction =
+  | { readonly kind: 'unitary'; readonly matrix: Matrix2 }
+  | { readonly kind: 'swap' }
+  | { readonly kind: 'phase'; readonly angle: number };
+
+export interface StandardGate {
+  readonly name: string;
+  readonly params: number;
+  /** Qubit operands, built-in controls first. */
+  readonly qubits: number;
+  /** How many leading operands are controls (cx: 1, ccx: 2, cswap: 1). */
+  readonly controls: number;
+  /** True when the gate is its own inverse for every parameter value. */
+  readonly selfInverse: boolean;
+  readonly base: (params: readonly number[]) => BaseAction;
+}
+
+/** U(θ, φ, λ) of the OpenQASM 3 specification: [[cos θ/2, −e^{iλ} sin θ/2], [e^{iφ} sin θ/2, e^{i(φ+λ)} cos θ/2]]. */
+export function uMatrix(theta: number, phi: number, lambda: number, globalPhase = 0): Matrix2 {
+  const c = Math.cos(theta / 2);
+  const s = Math.sin(theta / 2);
+  const cis = (angle: number): [number, number] => [Math.cos(angle + globalPhase), Math.sin(angle + globalPhase)];
+  const [g0, g1] = cis(0);
+  const [l0, l1] = cis(lambda);
+  const [p0, p1] = cis(phi);
+  const [pl0, pl1] = cis(phi + lambda);
+  return [c * g0, c * g1, -s * l0, -s * l1, s * p0, s * p1, c * pl0, c * pl1];
+}
+
+function diagonal(phase: number): Matrix2 {
+  return [1, 0, 0, 0, 0, 0, Math.cos(phase), Math.sin(phase)];
+}
+
+const unitary = (matrix: Matrix2): BaseAction => ({ kind: 'unitary', matrix });
+const HALF = Math.SQRT1_2;
+const X: Matrix2 = [0, 0, 1, 0, 1, 0, 0, 0];
+const Y: Matrix2 = [0, 0, 0, -1, 0, 1, 0, 0];
+const Z: Matrix2 = [1, 0, 0, 0, 0, 0, -1, 0];
+const H: Matrix2 = [HALF, 0, HALF, 0, HALF, 0, -HALF, 0];
+const IDENTITY: Matrix2 = [1, 0, 0, 0, 0, 0, 1, 0];
+const SX: Matrix2 = [0.5, 0.5, 0.5, -0.5, 0.5, -0.5, 0.5, 0.5];
+
+function gate(
+  name: string,
+  params: number,
+  qubits: number,
+  controls: number,
+  selfInverse: boolean,
+  base: (p: readonly number[]) => BaseAction,
+): StandardGate {
+  return { name, params, qubits, controls, selfInverse, base };
+}
+
+const p0 = (p: readonly number[]): number => p[0] as number;
+const p1 = (p: readonly number[]): number => p[1] as number;
+const p2 = (p: readonly number[]): number => p[2] as number;
+const p3 = (p: readonly number[]): number => p[3] as number;
+
+const rx = (p: readonly number[]): BaseAction => unitary(uMatrix(p0(p), -Math.PI / 2, Math.PI / 2));
+const ry = (p: readonly number[]): BaseAction => unitary(uMatrix(p0(p), 0, 0));
+const rz = (p: readonly number[]): BaseAction => unitary(uMatrix(0, 0, p0(p), -p0(p) / 2));
+const phaseGate = (p: readonly number[]): BaseAction => unitary(diagonal(p0(p)));
+
+const GATES: readonly StandardGate[] = [
+  gate('U', 3, 1, 0, false, (p) => unitary(uMatrix(p0(p), p1(p), p2(p)))),
+  gate('gphase', 1, 0, 0, false, (p) => ({ kind: 'phase', angle: p0(p) })),
+  gate('p', 1, 1, 0, false, phaseGate),
+  gate('x', 0, 1, 0, true, () => unitary(X)),
+  gate('y', 0, 1, 0, true, () => unitary(Y)),
+  gate('z', 0, 1, 0, true, () => unitary(Z)),
+  gate('h', 0, 1, 0, true, () => unitary(H)),
+  gate('s', 0, 1, 0, false, () => unitary(diagonal(Math.PI / 2))),
+  gate('sdg', 0, 1, 0, false, () => unitary(diagonal(-Math.PI / 2))),
+  gate('t', 0, 1, 0, false, () => unitary(diagonal(Math.PI / 4))),
+  gate('tdg', 0, 1, 0, false, () => unitary(diagonal(-Math.PI / 4))),
+  gate('sx', 0, 1, 0, false, () => unitary(SX)),
+  gate('rx', 1, 1, 0, false, rx),
+  gate('ry', 1, 1, 0, false, ry),
+  gate('rz', 1, 1, 0, false, rz),
+  gate('cx', 0, 2, 1, true, () => unitary(X)),
+  gate('cy', 0, 2, 1, true, () => unitary(Y)),
+  gate('cz', 0, 2, 1, true, () => unitary(Z)),
+  gate('cp', 1, 2, 1, false, phaseGate),
+  gate('crx', 1, 2, 1, false, rx),
+  gate('cry', 1, 2, 1, false, ry),
+  gate('crz', 1, 2, 1, false, rz),
+  gate('ch', 0, 2, 1, true, () => unitary(H)),
+  gate('swap', 0, 2, 0, true, () => ({ kind: 'swap' })),
+  gate('ccx', 0, 3, 2, true, () => unitary(X)),
+  gate('cswap', 0, 3, 1, true, () => ({ kind: 'swap' })),
+  // cu = p(γ) on the control, then ctrl @ U: the control-1 branch carries e^{iγ} U.
+  gate('cu', 4, 2, 1, false, (p) => unitary(uMatrix(p0(p), p1(p), p2(p), p3(p)))),
+  gate('CX', 0, 2, 1, true, () => unitary(X)),
+  gate('phase', 1, 1, 0, false, phaseGate),
+  gate('cphase', 1, 2, 1, false, phaseGate),
+  gate('id', 0, 1, 0, true, () => unitary(IDENTITY)),
+  gate('u1', 1, 1, 0, false, phaseGate),
+  gate('u2', 2, 1, 0, false, (p) => unitary(uMatrix(Math.PI / 2, p0(p), p1(p), -(p0(p) + p1(p)) / 2))),
+  gate('u3', 3, 1, 0, false, (p) => unitary(uMatrix(p0(p), p1(p), p2(p), -(p1(p) + p2(p)) / 2))),
+];
+
+const BY_NAME: ReadonlyMap<string, StandardGate> = new Map(GATES.map((g) => [g.name, g]));
+
+/** All standard gates, in library order. */
+export const STANDARD_GATES: readonly StandardGate[] = GATES;
+
+/** The standard gate named `name`, or undefined. */
+export function standardGate(name: string): StandardGate | undefined {
+  return BY_NAME.get(name);
+}

@@ -1,0 +1,16 @@
+// describeModel: a one-line human summary of a model for CLI output.
+import type { FermionModel } from './FermionModel.js';
+
+/** E.g. `hubbard-dimer: Hubbard chain of 2 sites, 4 modes, 2 electrons (spin 0), η = 0.1`. */
+export function describeModel(model: FermionModel): string {
+  const form = model.form;
+  let kind = 'model';
+  if (form?.kind === 'explicit') kind = 'explicit model';
+  else if (form?.kind === 'hubbard') {
+    kind = form.shape === 'grid' ? `Hubbard grid of ${form.size.join('×')} sites` : `Hubbard ${form.shape} of ${form.size[0]} sites`;
+  } else if (form?.kind === 'impurity') {
+    kind = `Anderson impurity with ${form.bathLevels} bath level${form.bathLevels === 1 ? '' : 's'}`;
+  }
+  const spin = model.spinPolarization === undefined ? '' : ` (spin ${model.spinPolarization})`;
+  return `${model.name}: ${kind}, ${model.modes} modes, ${model.electrons} electrons${spin}, η = ${model.broadening}`;
+}

@@ -1,0 +1,11 @@
+// BuiltHamiltonian: what each model-file form contributes before the common keys are applied.
+import type { ComplexMatrix, ModelForm, TwoBodyTerm } from '../FermionModel.js';
+
+export interface BuiltHamiltonian {
+  readonly form: ModelForm;
+  readonly modes: number;
+  readonly oneBody: ComplexMatrix;
+  readonly twoBody: readonly TwoBodyTerm[];
+  /** Presets only: spin-up modes (site order) then spin-down modes. */
+  readonly spinBlocks?: { readonly up: readonly number[]; readonly down: readonly number[] };
+}

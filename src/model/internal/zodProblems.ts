@@ -1,0 +1,37 @@
+// zodProblems: turns zod issues into Problems with plain-language messages (missing, wrong type, unknown key, range).
+import type { z } from 'zod';
+import type { Problem } from './Problem.js';
+
+export function zodProblems(error: z.ZodError): Problem[] {
+  const problems: Problem[] = [];
+  for (const issue of error.issues) {
+    const path = issue.path.filter((k): k is string | number => typeof k !== 'symbol');
+    if (issue.code === 'unrecognized_keys') {
+      for (const key of issue.keys) problems.push({ path: [...path, key], message: 'unknown key' });
+    } else {
+      problems.push({ path, message: describeIssue(issue) });
+    }
+  }
+  return problems;
+}
+
+function describeIssue(issue: z.core.$ZodIssue): string {
+  const hasInput = 'input' in issue && issue.input !== undefined;
+  const got = hasInput ? `, got ${JSON.stringify(issue.input)}` : '';
+  switch (issue.code) {
+    case 'invalid_type':
+      if (!hasInput) return 'required field is missing';
+      return `expected ${issue.expected === 'int' ? 'an integer' : issue.expected}${got}`;
+    case 'too_small':
+      if (issue.origin === 'array') return `expected at least ${issue.minimum} items`;
+      if (issue.origin === 'string') return 'must not be empty';
+      return `must be ${issue.inclusive ? '≥' : '>'} ${issue.minimum}${got}`;
+    case 'too_big':
+      if (issue.origin === 'array') return `expected at most ${issue.maximum} items`;
+      return `must be ${issue.inclusive ? '≤' : '<'} ${issue.maximum}${got}`;
+    case 'invalid_value':
+      return `expected one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}${got}`;
+    default:
+      return `${issue.message}${got}`;
+  }
+}
