@@ -107,7 +107,10 @@ export function resolveGate(g: FlatGate): ResolvedGate {
   }
   if (base.kind === 'swap') {
     // Swap has eigenvalues +1 (symmetric) and −1 (antisymmetric); (−1)^k = e^{iπk} on the principal branch.
-    return { kind: 'swap', a: operands[0] as number, b: operands[1] as number, phaseRe: Math.cos(Math.PI * exponent), phaseIm: Math.sin(Math.PI * exponent), controls, negControls };
+    // Integer powers are exact (sin(πk) is not exactly 0 in floating point).
+    const odd = Math.abs(exponent) % 2 === 1;
+    const [phaseRe, phaseIm] = Number.isInteger(exponent) ? [odd ? -1 : 1, 0] : [Math.cos(Math.PI * exponent), Math.sin(Math.PI * exponent)];
+    return { kind: 'swap', a: operands[0] as number, b: operands[1] as number, phaseRe, phaseIm, controls, negControls };
   }
   return { kind: 'unitary', target: operands[0] as number, matrix: unitaryPower(base.matrix, exponent), controls, negControls };
 }

@@ -12,5 +12,5 @@ export function describeModel(model: FermionModel): string {
     kind = `Anderson impurity with ${form.bathLevels} bath level${form.bathLevels === 1 ? '' : 's'}`;
   }
   const spin = model.spinPolarization === undefined ? '' : ` (spin ${model.spinPolarization})`;
-  return `${model.name}: ${kind}, ${model.modes} modes, ${model.electrons} electrons${spin}, η = ${model.broadening}`;
+  return `${model.name}: ${kind}, ${model.modes} modes, ${model.electrons} electron${model.electrons === 1 ? '' : 's'}${spin}, η = ${model.broadening}`;
 }

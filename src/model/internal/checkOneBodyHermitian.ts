@@ -44,7 +44,7 @@ export function checkOneBodyHermitian(
       t.re[ij] = re;
       t.im[ij] = im;
       t.re[ji] = re;
-      t.im[ji] = -im;
+      t.im[ji] = 0 - im; // 0 − im, not −im, so a real entry never becomes −0
     }
   }
 }

@@ -1,0 +1,38 @@
+/**
+ * controlledEncoding: the controlled version of an encoding. A control qubit joins the system register
+ * as its top qubit (index n); the encoded operator is |0><0| ⊗ αI + |1><1| ⊗ M, with the same α.
+ */
+import { defineBlock } from '../../circuit/defineBlock.js';
+import { call } from '../../circuit/ops.js';
+import { ancillaQubits, memoiseMatrix, type BlockEncoding } from '../BlockEncoding.js';
+import { identityMatrix, kronMatrices, weightedSum, zeroMatrix } from '../internal/denseAlgebra.js';
+
+function projector(bit: 0 | 1) {
+  const p = zeroMatrix(2);
+  p.re[bit * 3] = 1;
+  return p;
+}
+
+export function controlledEncoding(encoding: BlockEncoding, label = `controlled ${encoding.label}`): BlockEncoding {
+  const n = encoding.systemQubits;
+  const a = ancillaQubits(encoding);
+  const inner = [...Array.from({ length: n }, (_, k) => k), ...Array.from({ length: a }, (_, k) => n + 1 + k)];
+  return {
+    ...encoding,
+    label,
+    systemQubits: n + 1,
+    block: defineBlock({ name: 'controlled', role: `block-encoding of ${label}`, qubits: n + 1 + a }, [
+      call(encoding.block, inner, [], { controls: [n] }),
+    ]),
+    exact: memoiseMatrix(() => {
+      const dim = 2 ** n;
+      return weightedSum(
+        [
+          { weight: { re: encoding.alpha, im: 0 }, matrix: kronMatrices(projector(0), identityMatrix(dim)) },
+          { weight: { re: 1, im: 0 }, matrix: kronMatrices(projector(1), encoding.exact()) },
+        ],
+        2 * dim,
+      );
+    }),
+  };
+}

@@ -1,0 +1,106 @@
+/**
+ * lanczos: the three-term Lanczos recurrence for a Hermitian operator (Lanczos 1950), optionally
+ * keeping the basis with full reorthogonalisation (twice, "twice is enough"), and keeping every
+ * vector orthogonal to a set of already-found eigenvectors (deflation).
+ */
+import { axpy, dot, norm, orthogonalize, scale, zeroVec, type CVec } from './vec.js';
+
+export interface LanczosSpec {
+  apply(x: CVec, y: CVec): void;
+  /** Normalised start vector (not modified). */
+  readonly start: CVec;
+  readonly maxSteps: number;
+  readonly deflate: readonly CVec[];
+  /** Store the basis and reorthogonalise against all of it (small sectors). */
+  readonly keepBasis: boolean;
+  /** Complex vectors are needed (complex H or complex start). */
+  readonly complex: boolean;
+  /** Called after each step with α_0…α_m and β_1…β_{m+1}; return true to stop. */
+  stop?(alpha: readonly number[], beta: readonly number[]): boolean;
+  /** Called with each Lanczos vector v_k as it is formed (before step k). */
+  visit?(k: number, v: CVec): void;
+  /** Return right after visiting v_{maxSteps−1}, skipping its product with H. */
+  readonly visitOnlyLast?: boolean;
+}
+
+export interface LanczosRun {
+  readonly alpha: number[];
+  /** beta[k] couples v_k and v_{k+1}; the last one is the norm of the final residual. */
+  readonly beta: number[];
+  /** The Krylov space closed (β ≈ 0): the recurrence is exact. */
+  readonly exhausted: boolean;
+  readonly basis: CVec[] | null;
+}
+
+/** Relative size of β below which the Krylov space counts as exhausted. */
+export const EXHAUSTED = 1e-12;
+
+export function lanczos(spec: LanczosSpec): LanczosRun {
+  const dim = spec.start.re.length;
+  const alpha: number[] = [];
+  const beta: number[] = [];
+  const basis: CVec[] | null = spec.keepBasis ? [spec.start] : null;
+  let v: CVec = spec.start;
+  let vPrev: CVec | null = null;
+  let spare: CVec | null = null;
+  let betaPrev = 0;
+  let scaleSeen = 0;
+  let exhausted = false;
+  for (let m = 0; m < spec.maxSteps; m++) {
+    spec.visit?.(m, v);
+    if (spec.visitOnlyLast === true && m === spec.maxSteps - 1) break;
+    const w: CVec = spare ?? zeroVec(dim, spec.complex);
+    spec.apply(v, w);
+    if (vPrev !== null) axpy(-betaPrev, 0, vPrev, w);
+    const a = dot(v, w)[0];
+    axpy(-a, 0, v, w);
+    orthogonalize(w, spec.deflate);
+    if (basis !== null) {
+      orthogonalize(w, basis);
+      orthogonalize(w, basis);
+    }
+    const b = norm(w);
+    alpha.push(a);
+    beta.push(b);
+    scaleSeen = Math.max(scaleSeen, Math.abs(a), b, betaPrev);
+    if (b <= EXHAUSTED * Math.max(scaleSeen, 1e-300) || b === 0) {
+      exhausted = true;
+      break;
+    }
+    if (spec.stop?.(alpha, beta) === true) break;
+    scale(1 / b, w);
+    if (basis !== null) {
+      basis.push(w);
+      spare = null;
+    } else {
+      spare = vPrev === null || vPrev === spec.start ? null : vPrev;
+    }
+    vPrev = v;
+    v = w;
+    betaPrev = b;
+  }
+  return { alpha, beta, exhausted, basis };
+}
+
+/** Σ_k y_k v_k from a stored basis. */
+export function combine(basis: readonly CVec[], y: ArrayLike<number>, complex: boolean): CVec {
+  const out = zeroVec(basis[0]!.re.length, complex);
+  for (let k = 0; k < y.length; k++) axpy(y[k]!, 0, basis[k]!, out);
+  return out;
+}
+
+/** Σ_k y_k v_k by running the same recurrence again (bit-identical vectors), storing nothing. */
+export function combineByRerun(spec: LanczosSpec, steps: number, y: ArrayLike<number>): CVec {
+  const out = zeroVec(spec.start.re.length, spec.complex);
+  lanczos({
+    ...spec,
+    keepBasis: false,
+    maxSteps: steps,
+    stop: undefined,
+    visitOnlyLast: true,
+    visit: (k, v) => {
+      if (k < y.length) axpy(y[k]!, 0, v, out);
+    },
+  });
+  return out;
+}

@@ -1,0 +1,21 @@
+/**
+ * applyCircuit: applies every unitary operation of a circuit to a state in place, streaming the
+ * flattened gates (barriers are ignored; measurements and resets are refused).
+ */
+import { qubitCount } from '../circuit/CircuitBuilder.js';
+import type { Circuit } from '../circuit/types.js';
+import type { SimulationOptions } from './SimulationOptions.js';
+import type { StateVector } from './StateVector.js';
+import { applyUnitaryStream } from './internal/applyFlatOps.js';
+import { flattenForSimulation } from './internal/flattenForSimulation.js';
+
+/**
+ * Applies `circuit` to `state` (which may have more qubits than the circuit; the circuit acts on
+ * the low ones). Throws InputError when the circuit measures or resets (use outcomeDistribution),
+ * RangeError when the state has too few qubits.
+ */
+export function applyCircuit(state: StateVector, circuit: Circuit, options: SimulationOptions = {}): void {
+  const needed = qubitCount(circuit);
+  if (state.qubits < needed) throw new RangeError(`applyCircuit: the circuit has ${needed} qubits, the state only ${state.qubits}`);
+  applyUnitaryStream(state, flattenForSimulation(circuit, options), 'applyCircuit');
+}
