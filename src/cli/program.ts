@@ -3,6 +3,7 @@
  * Each command lives in its own file under commands/ and exports one `register…` function.
  */
 import { Command } from 'commander';
+import { registerCheckCommand } from './commands/check.js';
 import { registerRunCommand } from './commands/run.js';
 
 export function buildProgram(): Command {
@@ -15,5 +16,6 @@ export function buildProgram(): Command {
     .showHelpAfterError(false)
     .configureOutput({ writeErr: (text) => process.stderr.write(text) });
   registerRunCommand(program);
+  registerCheckCommand(program);
   return program;
 }

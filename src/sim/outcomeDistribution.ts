@@ -5,7 +5,7 @@
 import { bitCount, qubitCount } from '../circuit/CircuitBuilder.js';
 import type { Circuit } from '../circuit/types.js';
 import type { SimulationOptions } from './SimulationOptions.js';
-import { NEGLIGIBLE_PROBABILITY, sortedOutcomes, type OutcomeDistribution } from './OutcomeDistribution.js';
+import { NEGLIGIBLE_PROBABILITY, sortedOutcomes, type OutcomeDistribution } from './outcomeTypes.js';
 import { branchOutcomes } from './internal/branchOutcomes.js';
 import { directOutcomes } from './internal/directOutcomes.js';
 import { measurementPlan } from './internal/measurementPlan.js';

@@ -5,7 +5,7 @@
  */
 import { bitCount, qubitCount } from '../circuit/CircuitBuilder.js';
 import type { Circuit } from '../circuit/types.js';
-import { sortedOutcomes, type OutcomeDistribution } from './OutcomeDistribution.js';
+import { sortedOutcomes, type OutcomeDistribution } from './outcomeTypes.js';
 import { outcomeDistribution, type OutcomeOptions } from './outcomeDistribution.js';
 import { sampleOutcomes } from './sampleOutcomes.js';
 import { isTooManyBranchesError } from './internal/TooManyBranchesError.js';

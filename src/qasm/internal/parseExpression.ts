@@ -4,8 +4,10 @@ import type { Expr } from './syntax.js';
 import type { TokenCursor } from './TokenCursor.js';
 import { fail, type Position } from './problem.js';
 
-/** Deepest expression tree (and parenthesis nesting) the reader accepts. */
-export const MAX_EXPRESSION_DEPTH = 200;
+/** Deepest nesting of parentheses, unary signs, ** and function calls the reader accepts. */
+export const MAX_EXPRESSION_NESTING = 200;
+/** Tallest expression tree the reader accepts (long flat sums count one level per term). */
+export const MAX_EXPRESSION_DEPTH = 2000;
 
 export const FUNCTIONS = new Set(['sin', 'cos', 'tan', 'arcsin', 'arccos', 'arctan', 'exp', 'log', 'sqrt']);
 
@@ -94,8 +96,8 @@ class ExpressionParser {
 
   private enter(): void {
     this.nesting++;
-    if (this.nesting > MAX_EXPRESSION_DEPTH) {
-      fail(this.cursor.position, `an expression at most ${MAX_EXPRESSION_DEPTH} levels deep`, `expression nested more than ${MAX_EXPRESSION_DEPTH} levels deep`);
+    if (this.nesting > MAX_EXPRESSION_NESTING) {
+      fail(this.cursor.position, `an expression nested at most ${MAX_EXPRESSION_NESTING} levels deep`, `expression nested more than ${MAX_EXPRESSION_NESTING} levels deep`);
     }
   }
 }

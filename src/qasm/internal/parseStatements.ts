@@ -4,15 +4,11 @@ import { parseExpression } from './parseExpression.js';
 import type { Expr, GateCall, Identifier, Modifier, Operand, Statement } from './syntax.js';
 import type { TokenCursor } from './TokenCursor.js';
 import { fail } from './problem.js';
+import { UNSUPPORTED_STATEMENTS } from './keywords.js';
 
 const STATEMENT = 'a declaration, gate definition, gate call, measure, reset or barrier';
 const MODIFIERS = new Set(['ctrl', 'negctrl', 'inv', 'pow']);
-const UNSUPPORTED = new Set([
-  'if', 'else', 'for', 'while', 'def', 'return', 'let', 'const', 'int', 'uint', 'float', 'angle', 'bool', 'complex',
-  'input', 'output', 'box', 'delay', 'extern', 'defcal', 'cal', 'defcalgrammar', 'duration', 'stretch', 'array',
-  'break', 'continue', 'end', 'switch', 'case', 'default', 'opaque', 'pragma', 'durationof',
-]);
-const NOT_IN_GATE_BODY = new Set(['OPENQASM', 'include', 'qubit', 'bit', 'qreg', 'creg', 'gate', 'measure', 'reset', 'barrier', ...UNSUPPORTED]);
+const NOT_IN_GATE_BODY = new Set(['OPENQASM', 'include', 'qubit', 'bit', 'qreg', 'creg', 'gate', 'measure', 'reset', 'barrier', ...UNSUPPORTED_STATEMENTS]);
 
 function identifier(cursor: TokenCursor, what: string): Identifier {
   const token = cursor.expectIdentifier(what);
@@ -175,7 +171,7 @@ function statement(cursor: TokenCursor): Statement {
   if (token.kind !== 'identifier') return cursor.failHere(STATEMENT);
   const keyword = keywordStatement(cursor);
   if (keyword) return keyword;
-  if (UNSUPPORTED.has(token.text)) return fail(token, STATEMENT, `unsupported statement '${token.text}': expected ${STATEMENT}`);
+  if (UNSUPPORTED_STATEMENTS.has(token.text)) return fail(token, STATEMENT, `unsupported statement '${token.text}': expected ${STATEMENT}`);
   const after = cursor.peek(1);
   if (after.kind === 'punctuation' && (after.text === '[' || after.text === '=')) {
     const bit = operand(cursor, 'a bit');

@@ -6,7 +6,7 @@
 import type { Circuit } from '../../circuit/types.js';
 import { StateVector } from '../StateVector.js';
 import type { SimulationOptions } from '../SimulationOptions.js';
-import { NEGLIGIBLE_PROBABILITY } from '../OutcomeDistribution.js';
+import { NEGLIGIBLE_PROBABILITY } from '../outcomeTypes.js';
 import { applyUnitaryStream } from './applyFlatOps.js';
 import { moveOneToZero, project, weightOfOne } from './collapse.js';
 import { flattenForSimulation } from './flattenForSimulation.js';

@@ -1,5 +1,5 @@
 /**
- * OutcomeDistribution: outcomes of a circuit's classical bits with their probabilities (or counts),
+ * The outcome types: outcomes of a circuit's classical bits with their probabilities (or counts),
  * keyed by bitstring and sorted by it; plus the threshold below which a probability counts as zero.
  */
 

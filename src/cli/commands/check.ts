@@ -1,0 +1,69 @@
+/**
+ * The `check` command: builds every block-encoding the pipeline uses for a model and verifies each by
+ * statevector simulation against its exact operator; prints a table (or JSON) and exits 1 on a failure.
+ */
+import type { Command } from 'commander';
+import { loadModelFile } from '../../model/loadModelFile.js';
+import { describeModel } from '../../model/describeModel.js';
+import { checkModelBlocks } from '../../verify/checkModelBlocks.js';
+import type { CheckRow } from '../../verify/encodingCheck.js';
+import { totalOf } from '../format/totalOf.js';
+import { formatTable } from '../format/formatTable.js';
+import { parsePositiveNumber } from '../options.js';
+
+interface CheckOptions {
+  readonly json?: boolean;
+  readonly tolerance: string;
+}
+
+function jsonReport(rows: readonly CheckRow[], ok: boolean): string {
+  const blocks = rows.map((r) => ({
+    label: r.label,
+    systemQubits: r.systemQubits,
+    ancillaQubits: r.ancillaQubits,
+    alpha: r.alpha,
+    maxError: r.maxError,
+    gates: r.gates,
+  }));
+  return `${JSON.stringify({ ok, blocks }, null, 2)}\n`;
+}
+
+function tableReport(heading: string, rows: readonly CheckRow[], tolerance: number): string {
+  const table = formatTable(
+    ['block', 'system', 'ancilla', 'alpha', 'gates', 'max error', 'check', 'result'],
+    rows.map((r) => [
+      r.label,
+      String(r.systemQubits),
+      String(r.ancillaQubits),
+      r.alpha.toPrecision(6),
+      String(totalOf(r.gates)),
+      r.maxError.toExponential(2),
+      r.method,
+      r.passed ? 'pass' : 'FAIL',
+    ]),
+    ['left', 'right', 'right', 'right', 'right', 'right', 'left', 'left'],
+  );
+  const failed = rows.filter((r) => !r.passed).length;
+  const summary = failed === 0 ? `all ${rows.length} blocks within ${tolerance}` : `${failed} of ${rows.length} blocks exceed ${tolerance}`;
+  return `${heading}\n${table}\n${summary}\n` +
+    'max error: largest entry error of <0_anc|U|0_anc> against M/α (exhaustive: every column; probe: random states;\n' +
+    'state: prepared amplitudes against the exact Slater determinant).\n';
+}
+
+/** Adds `check MODEL [--json] [--tolerance τ]` to the program. */
+export function registerCheckCommand(program: Command): void {
+  program
+    .command('check')
+    .description("build the model's block-encodings and verify each against its exact operator by simulation")
+    .argument('<model>', 'model file (JSON)')
+    .option('--json', 'print { "ok": bool, "blocks": [...] } instead of a table')
+    .option('--tolerance <tau>', 'largest accepted error', '1e-10')
+    .action((file: string, options: CheckOptions) => {
+      const tolerance = parsePositiveNumber('--tolerance', options.tolerance);
+      const model = loadModelFile(file);
+      const rows = checkModelBlocks(model, { tolerance });
+      const ok = rows.every((r) => r.passed);
+      process.stdout.write(options.json ? jsonReport(rows, ok) : tableReport(describeModel(model), rows, tolerance));
+      if (!ok) process.exitCode = 1;
+    });
+}

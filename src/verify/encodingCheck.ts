@@ -1,0 +1,35 @@
+/**
+ * encodingCheck: one row of a verification table — an encoding's sizes, α, gate counts and the error
+ * found by verifyEncoding, judged against a tolerance.
+ */
+import { ancillaQubits, type BlockEncoding } from '../blocks/BlockEncoding.js';
+import { blockCounts, countsToObject } from '../circuit/gateCounts.js';
+import { verifyEncoding, type VerifyOptions } from './verifyEncoding.js';
+
+export interface CheckRow {
+  readonly label: string;
+  readonly systemQubits: number;
+  readonly ancillaQubits: number;
+  readonly alpha: number;
+  /** Largest entry error found (see VerifyReport.maxError). */
+  readonly maxError: number;
+  readonly unitarityDeviation: number;
+  readonly method: 'exhaustive' | 'probe' | 'state';
+  readonly gates: Record<string, number>;
+  readonly passed: boolean;
+}
+
+export function encodingCheck(encoding: BlockEncoding, tolerance: number, options: VerifyOptions = {}): CheckRow {
+  const report = verifyEncoding(encoding, options);
+  return {
+    label: encoding.label,
+    systemQubits: encoding.systemQubits,
+    ancillaQubits: ancillaQubits(encoding),
+    alpha: encoding.alpha,
+    maxError: report.maxError,
+    unitarityDeviation: report.unitarityDeviation,
+    method: report.method,
+    gates: countsToObject(blockCounts(encoding.block)),
+    passed: report.maxError <= tolerance && report.unitarityDeviation <= tolerance,
+  };
+}
