@@ -32,7 +32,8 @@ async function main(argv: string[]): Promise<number> {
 
 main(process.argv).then(
   (code) => {
-    process.exitCode = code;
+    // A command may itself report a failed check (exit 1) through process.exitCode.
+    if (code !== 0 || process.exitCode === undefined) process.exitCode = code;
   },
   () => {
     process.exitCode = 1;

@@ -1,6 +1,6 @@
 /**
  * hermitianEigen: all eigenpairs of a dense complex Hermitian matrix by the cyclic complex Jacobi
- * method (a phase rotation making a_pq real, then the real Jacobi rotation; Golub & Van Loan §8.5).
+ * method (a phase rotation making a_pq real, then the real Jacobi rotation; Golub & Van Loan, Matrix Computations, ch. 8).
  */
 import type { ComplexMatrix } from '../model/FermionModel.js';
 import { hermiticityError } from './hermiticityError.js';

@@ -30,7 +30,7 @@ function modifiers(controls: number, negControls: number, inverse: boolean, powe
     controlPrefix('ctrl', controls) +
     controlPrefix('negctrl', negControls) +
     (inverse ? 'inv @ ' : '') +
-    (power !== 1 || Object.is(power, -0) ? `pow(${formatNumber(power)}) @ ` : '')
+    (power !== 1 ? `pow(${formatNumber(power)}) @ ` : '')
   );
 }
 
@@ -52,6 +52,7 @@ export class QasmDefinitions {
 
   /** Reserves `wanted` (or `wanted_2`, `wanted_3`, …) and returns the name reserved. */
   reserve(wanted: string): string {
+    if (!IDENTIFIER.test(wanted)) throw new RangeError(`writeQasm: name "${wanted}" is not an identifier`);
     let name = wanted;
     for (let k = 2; this.taken.has(name) || standardGate(name); k++) name = `${wanted}_${k}`;
     this.taken.add(name);
@@ -118,7 +119,6 @@ export class QasmDefinitions {
     }
     const known = table.get(key);
     if (known !== undefined) return known;
-    if (!IDENTIFIER.test(block.name)) throw new RangeError(`writeQasm: block name "${block.name}" is not an identifier`);
     const suffix = (part === 'whole' ? '' : `_${part}`) + (controls + negControls > 0 ? `_c${controls}n${negControls}` : '');
     const wanted = block.name + suffix;
     const render = this.renderer(block, part, controls, negControls);
@@ -161,10 +161,9 @@ export class QasmDefinitions {
       role += ` (first ${controls} control and ${negControls} negative-control qubits distributed; compute parts uncontrolled)`;
     }
     const operands = [...controlNames, ...negNames, ...qubitNames];
-    const header = `gate NAME${argumentList(params)}${operands.length > 0 ? ' ' + operands.join(', ') : ''} {`;
+    const signature = `${argumentList(params)}${operands.length > 0 ? ' ' + operands.join(', ') : ''}`;
     const oneLineRole = role.replace(/\s+/g, ' ').trim();
-    return (name) =>
-      [`// ${name}: ${oneLineRole}`, header.replace('NAME', name), ...lines.map((l) => `  ${l}`), '}'].join('\n');
+    return (name) => [`// ${name}: ${oneLineRole}`, `gate ${name}${signature} {`, ...lines.map((l) => `  ${l}`), '}'].join('\n');
   }
 }
 

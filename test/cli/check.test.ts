@@ -1,0 +1,50 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { runCli } from '../helpers/runCli.js';
+
+const MODEL = 'circuits/explicit-three-mode.json';
+
+describe('polewright check MODEL', () => {
+  it('prints one row per block with the fixed labels and passes', () => {
+    const result = runCli(['check', MODEL]);
+    expect(result.status).toBe(0);
+    for (const label of ['annihilation 0', 'creation 2', 'H', 'A (one-body)', 'B (two-body)', 'orbital rotation', 'orbital rotation inverse', 'Slater determinant']) {
+      expect(result.stdout).toMatch(new RegExp(`^${label.replace(/[()]/g, '\\$&')}\\s`, 'm'));
+    }
+    expect(result.stdout).not.toContain('FAIL');
+  });
+
+  it('--json prints { ok, blocks[label, systemQubits, ancillaQubits, alpha, maxError, gates] }', () => {
+    const result = runCli(['check', MODEL, '--json']);
+    expect(result.status).toBe(0);
+    const report = JSON.parse(result.stdout);
+    expect(report.ok).toBe(true);
+    expect(report.blocks).toHaveLength(3 * 2 + 6);
+    for (const block of report.blocks) {
+      expect(Object.keys(block)).toEqual(['label', 'systemQubits', 'ancillaQubits', 'alpha', 'maxError', 'gates']);
+      expect(block.maxError).toBeLessThanOrEqual(1e-10);
+    }
+    expect(report.blocks.find((b: { label: string }) => b.label === 'creation 1')).toMatchObject({ systemQubits: 3, ancillaQubits: 1, alpha: 1 });
+  });
+
+  it('exits 1 when a block exceeds the tolerance', () => {
+    const result = runCli(['check', MODEL, '--json', '--tolerance', '1e-300']);
+    expect(result.status).toBe(1);
+    expect(JSON.parse(result.stdout).ok).toBe(false);
+  });
+
+  it('exits 2 with a message naming the problem for bad input', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pw-check-'));
+    const bad = join(dir, 'bad.json');
+    writeFileSync(bad, '{ "modes": 2, "oneBody": [[0, 5, 1]] }');
+    const missing = runCli(['check', bad]);
+    expect(missing.status).toBe(2);
+    expect(missing.stderr).toMatch(/electrons/);
+    expect(missing.stderr).not.toMatch(/\n\s+at /);
+    const tolerance = runCli(['check', MODEL, '--tolerance', 'abc']);
+    expect(tolerance.status).toBe(2);
+    expect(tolerance.stderr).toMatch(/--tolerance/);
+  });
+});
