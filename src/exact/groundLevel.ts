@@ -43,7 +43,7 @@ export interface GroundLevel {
 }
 
 /** Sectors up to this size keep their Lanczos basis (full reorthogonalisation); larger ones rerun. */
-export const KEEP_BASIS_DIMENSION = 70000;
+export const KEEP_BASIS_DIMENSION = 20000;
 const MAX_CYCLES = 30;
 
 interface Lowest {

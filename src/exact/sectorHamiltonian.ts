@@ -10,13 +10,17 @@ import type { CVec } from './internal/vec.js';
 import type { FockSector } from './fockSector.js';
 import { sectorIndex } from './sectorIndex.js';
 
-/** Sparse transitions between patterns of one popcount: dst += coef · src. */
+/** Sparse transitions between patterns of one popcount, by destination (CSR): y[d] += Σ coef·x[src]. */
 interface HopTable {
+  /** Entries of destination d are start[d] … start[d+1]−1. */
+  readonly start: Int32Array;
   readonly src: Int32Array;
-  readonly dst: Int32Array;
   readonly re: Float64Array;
   readonly im: Float64Array;
 }
+
+/** Largest dimension × generic-term count for which the generic terms are stored as a sparse matrix. */
+const GENERIC_TABLE_LIMIT = 2e7;
 
 export interface SectorHamiltonian {
   readonly sector: FockSector;
@@ -29,22 +33,24 @@ export interface SectorHamiltonian {
 }
 
 function hopTable(patterns: Int32Array, rank: Int32Array, hops: readonly Hop[]): HopTable {
-  const src: number[] = [];
-  const dst: number[] = [];
-  const re: number[] = [];
-  const im: number[] = [];
+  const rows: { src: number; re: number; im: number }[][] = Array.from({ length: patterns.length }, () => []);
   for (let r = 0; r < patterns.length; r++) {
     const p = patterns[r]!;
     for (const hop of hops) {
       const [q, sign] = applyLadders(p, [[hop.i, true], [hop.j, false]]);
       if (sign === 0) continue;
-      src.push(r);
-      dst.push(rank[q]!);
-      re.push(sign * hop.re);
-      im.push(sign * hop.im);
+      rows[rank[q]!]!.push({ src: r, re: sign * hop.re, im: sign * hop.im });
     }
   }
-  return { src: Int32Array.from(src), dst: Int32Array.from(dst), re: Float64Array.from(re), im: Float64Array.from(im) };
+  const start = new Int32Array(patterns.length + 1);
+  for (let d = 0; d < rows.length; d++) start[d + 1] = start[d]! + rows[d]!.length;
+  const flat = rows.flat();
+  return {
+    start,
+    src: Int32Array.from(flat, (e) => e.src),
+    re: Float64Array.from(flat, (e) => e.re),
+    im: Float64Array.from(flat, (e) => e.im),
+  };
 }
 
 function blockDiagonal(terms: HamiltonianTerms, sector: FockSector, out: Float64Array): void {
@@ -111,92 +117,154 @@ export function sectorHamiltonian(model: FermionModel, sector: FockSector): Sect
   const lowModes = sector.spec.lowModes;
 
   function applyReal(x: Float64Array, y: Float64Array): void {
-    for (let s = 0; s < y.length; s++) y[s] = diagonal[s]! * x[s]!;
     for (const block of sector.blocks) {
       const D = block.highPatterns.length;
       const nLow = block.lowPatterns.length;
       const off = block.offset;
-      const lt = lowTables.get(block.lowCount)!;
-      for (let e = 0; e < lt.src.length; e++) {
-        const c = lt.re[e]!;
-        const so = off + lt.src[e]! * D;
-        const d0 = off + lt.dst[e]! * D;
-        for (let t = 0; t < D; t++) y[d0 + t]! += c * x[so + t]!;
-      }
       const ht = highTables.get(sector.spec.electrons - block.lowCount)!;
-      const hs = ht.src;
-      const hd = ht.dst;
-      const hr = ht.re;
-      const ne = hs.length;
+      const hStart = ht.start;
+      const hSrc = ht.src;
+      const hRe = ht.re;
       for (let r = 0; r < nLow; r++) {
         const base = off + r * D;
-        for (let e = 0; e < ne; e++) y[base + hd[e]!]! += hr[e]! * x[base + hs[e]!]!;
+        for (let d = 0; d < D; d++) {
+          let acc = diagonal[base + d]! * x[base + d]!;
+          const end = hStart[d + 1]!;
+          for (let e = hStart[d]!; e < end; e++) acc += hRe[e]! * x[base + hSrc[e]!]!;
+          y[base + d] = acc;
+        }
+      }
+      const lt = lowTables.get(block.lowCount)!;
+      for (let dr = 0; dr < nLow; dr++) {
+        const d0 = off + dr * D;
+        const end = lt.start[dr + 1]!;
+        for (let e = lt.start[dr]!; e < end; e++) {
+          const c = lt.re[e]!;
+          const so = off + lt.src[e]! * D;
+          for (let t = 0; t < D; t++) y[d0 + t]! += c * x[so + t]!;
+        }
       }
     }
   }
 
   function applyComplex(xr: Float64Array, xi: Float64Array, yr: Float64Array, yi: Float64Array): void {
-    for (let s = 0; s < yr.length; s++) {
-      yr[s] = diagonal[s]! * xr[s]!;
-      yi[s] = diagonal[s]! * xi[s]!;
-    }
     for (const block of sector.blocks) {
       const D = block.highPatterns.length;
       const nLow = block.lowPatterns.length;
       const off = block.offset;
-      const lt = lowTables.get(block.lowCount)!;
-      for (let e = 0; e < lt.src.length; e++) {
-        const cr = lt.re[e]!;
-        const ci = lt.im[e]!;
-        const so = off + lt.src[e]! * D;
-        const d0 = off + lt.dst[e]! * D;
-        for (let t = 0; t < D; t++) {
-          const a = xr[so + t]!;
-          const b = xi[so + t]!;
-          yr[d0 + t]! += cr * a - ci * b;
-          yi[d0 + t]! += cr * b + ci * a;
-        }
-      }
       const ht = highTables.get(sector.spec.electrons - block.lowCount)!;
       for (let r = 0; r < nLow; r++) {
         const base = off + r * D;
-        for (let e = 0; e < ht.src.length; e++) {
-          const cr = ht.re[e]!;
-          const ci = ht.im[e]!;
-          const a = xr[base + ht.src[e]!]!;
-          const b = xi[base + ht.src[e]!]!;
-          yr[base + ht.dst[e]!]! += cr * a - ci * b;
-          yi[base + ht.dst[e]!]! += cr * b + ci * a;
+        for (let d = 0; d < D; d++) {
+          const g = diagonal[base + d]!;
+          let ar = g * xr[base + d]!;
+          let ai = g * xi[base + d]!;
+          const end = ht.start[d + 1]!;
+          for (let e = ht.start[d]!; e < end; e++) {
+            const cr = ht.re[e]!;
+            const ci = ht.im[e]!;
+            const a = xr[base + ht.src[e]!]!;
+            const b = xi[base + ht.src[e]!]!;
+            ar += cr * a - ci * b;
+            ai += cr * b + ci * a;
+          }
+          yr[base + d] = ar;
+          yi[base + d] = ai;
+        }
+      }
+      const lt = lowTables.get(block.lowCount)!;
+      for (let dr = 0; dr < nLow; dr++) {
+        const d0 = off + dr * D;
+        const end = lt.start[dr + 1]!;
+        for (let e = lt.start[dr]!; e < end; e++) {
+          const cr = lt.re[e]!;
+          const ci = lt.im[e]!;
+          const so = off + lt.src[e]! * D;
+          for (let t = 0; t < D; t++) {
+            const a = xr[so + t]!;
+            const b = xi[so + t]!;
+            yr[d0 + t]! += cr * a - ci * b;
+            yi[d0 + t]! += cr * b + ci * a;
+          }
         }
       }
     }
   }
 
-  function applyGeneric(x: CVec, y: CVec): void {
-    if (terms.generic.length === 0) return;
+  /** The generic terms as a sparse matrix by source state (built when small enough to store). */
+  function genericTable(): HopTable | null {
+    if (terms.generic.length === 0 || sector.dimension * terms.generic.length > GENERIC_TABLE_LIMIT) return null;
+    const start = new Int32Array(sector.dimension + 1);
+    const to: number[] = [];
+    const re: number[] = [];
+    const im: number[] = [];
+    forEachState((state, idx) => {
+      for (const term of terms.generic) {
+        const [q, sign] = applyLadders(state, term.ops);
+        if (sign === 0) continue;
+        to.push(target(q));
+        re.push(sign * term.re);
+        im.push(sign * term.im);
+      }
+      start[idx + 1] = to.length;
+    });
+    return { start, src: Int32Array.from(to), re: Float64Array.from(re), im: Float64Array.from(im) };
+  }
+
+  function forEachState(visit: (state: number, index: number) => void): void {
     for (const block of sector.blocks) {
       const D = block.highPatterns.length;
       for (let lr = 0; lr < block.lowPatterns.length; lr++) {
         const p = block.lowPatterns[lr]!;
-        for (let r = 0; r < D; r++) {
-          const s = p | (block.highPatterns[r]! << lowModes);
-          const idx = block.offset + lr * D + r;
-          const a = x.re[idx]!;
-          const b = x.im === null ? 0 : x.im[idx]!;
-          if (a === 0 && b === 0) continue;
-          for (const term of terms.generic) {
-            const [q, sign] = applyLadders(s, term.ops);
-            if (sign === 0) continue;
-            const to = sectorIndex(sector, q);
-            if (to < 0) throw new Error('sectorHamiltonian: a term leaves the sector');
-            const cr = sign * term.re;
-            const ci = sign * term.im;
-            y.re[to]! += cr * a - ci * b;
-            if (y.im !== null) y.im[to]! += cr * b + ci * a;
-          }
-        }
+        for (let r = 0; r < D; r++) visit(p | (block.highPatterns[r]! << lowModes), block.offset + lr * D + r);
       }
     }
+  }
+
+  function target(q: number): number {
+    const to = sectorIndex(sector, q);
+    if (to < 0) throw new Error('sectorHamiltonian: a term leaves the sector');
+    return to;
+  }
+
+  const table = genericTable();
+
+  function applyGeneric(x: CVec, y: CVec): void {
+    if (terms.generic.length === 0) return;
+    const xr = x.re;
+    const xi = x.im;
+    const yr = y.re;
+    const yi = y.im;
+    if (table !== null) {
+      for (let s = 0; s < sector.dimension; s++) {
+        const a = xr[s]!;
+        const b = xi === null ? 0 : xi[s]!;
+        if (a === 0 && b === 0) continue;
+        const end = table.start[s + 1]!;
+        for (let e = table.start[s]!; e < end; e++) {
+          const cr = table.re[e]!;
+          const ci = table.im[e]!;
+          const to = table.src[e]!;
+          yr[to]! += cr * a - ci * b;
+          if (yi !== null) yi[to]! += cr * b + ci * a;
+        }
+      }
+      return;
+    }
+    forEachState((state, idx) => {
+      const a = xr[idx]!;
+      const b = xi === null ? 0 : xi[idx]!;
+      if (a === 0 && b === 0) return;
+      for (const term of terms.generic) {
+        const [q, sign] = applyLadders(state, term.ops);
+        if (sign === 0) continue;
+        const to = target(q);
+        const cr = sign * term.re;
+        const ci = sign * term.im;
+        yr[to]! += cr * a - ci * b;
+        if (yi !== null) yi[to]! += cr * b + ci * a;
+      }
+    });
   }
 
   return {

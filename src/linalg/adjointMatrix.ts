@@ -1,5 +1,5 @@
 // adjointMatrix: the conjugate transpose a† of a dense complex matrix.
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from './ComplexMatrix.js';
 
 /** The conjugate transpose: (a†)_ij = conj(a_ji). */
 export function adjointMatrix(a: ComplexMatrix): ComplexMatrix {

@@ -2,7 +2,7 @@
  * hermitianEigen: all eigenpairs of a dense complex Hermitian matrix by the cyclic complex Jacobi
  * method (a phase rotation making a_pq real, then the real Jacobi rotation; Golub & Van Loan, Matrix Computations, ch. 8).
  */
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from './ComplexMatrix.js';
 import { hermiticityError } from './hermiticityError.js';
 
 export interface HermitianEigen {
@@ -48,7 +48,7 @@ export function hermitianEigen(a: ComplexMatrix, options: HermitianEigenOptions 
   const negligible = 1e-18 * Math.sqrt(frobenius);
   let sweeps = 0;
   while (sweepOnce(re, im, vr, vi, n, negligible)) {
-    if (++sweeps > MAX_SWEEPS) throw new RangeError(`hermitianEigen: no convergence after ${MAX_SWEEPS} sweeps`);
+    if (++sweeps > MAX_SWEEPS) throw new Error(`hermitianEigen: no convergence after ${MAX_SWEEPS} sweeps`);
   }
   return sorted(re, vr, vi, n);
 }

@@ -1,5 +1,5 @@
 // hermiticityError: how far a dense complex matrix is from Hermitian, as max |a_ij − conj(a_ji)|.
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from './ComplexMatrix.js';
 
 /** max_ij |a_ij − conj(a_ji)| (0 for an exactly Hermitian matrix; NaN entries give NaN). */
 export function hermiticityError(a: ComplexMatrix): number {

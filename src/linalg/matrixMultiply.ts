@@ -1,5 +1,5 @@
 // matrixMultiply: the product a·b of two dense complex n×n matrices.
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from './ComplexMatrix.js';
 
 /**
  * The product a·b (row-major, entry (i, j) at i·n + j).

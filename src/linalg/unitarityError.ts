@@ -1,5 +1,5 @@
 // unitarityError: how far a dense complex matrix is from unitary, as max |(a†a − I)_ij|.
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from './ComplexMatrix.js';
 
 /** max_ij |(a†a − I)_ij| (0 for an exactly unitary matrix; NaN entries give NaN). */
 export function unitarityError(a: ComplexMatrix): number {

@@ -4,12 +4,9 @@
  * modes numbered as in ../shared/CONVENTIONS.md (presets: all spin-up modes, then all spin-down).
  */
 
-/** A dense complex n×n matrix, row-major: entry (i, j) at index i*n + j. */
-export interface ComplexMatrix {
-  readonly n: number;
-  readonly re: Float64Array;
-  readonly im: Float64Array;
-}
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
+
+export type { ComplexMatrix };
 
 /** One two-body coefficient V_ijkl = <ij|v|kl>; repeated (i,j,k,l) entries are already summed. */
 export interface TwoBodyTerm {

@@ -17,6 +17,8 @@ export class QasmParseError extends InputError {
   /** `detail` is the message after the position; it usually starts with "expected …". */
   constructor(source: string, line: number, column: number, expected: string, detail: string) {
     super(`${source}:${line}:${column}: ${detail}`);
+    // InputError fixes the type of `name` to its own literal, so the subclass sets it at run time.
+    Object.defineProperty(this, 'name', { value: 'QasmParseError' });
     this.source = source;
     this.line = line;
     this.column = column;

@@ -27,6 +27,8 @@ export interface OneBodyRotationOptions {
   readonly name?: string;
   /** Relative tolerance of the Hermitian and circulant checks (times max(1, max |T_ij|)). Default 1e-10. */
   readonly tolerance?: number;
+  /** Givens route: the network arrangement passed to orbitalRotation. Default `rectangular`. */
+  readonly arrangement?: 'rectangular' | 'triangular';
 }
 
 export interface OneBodyRotation {
@@ -64,7 +66,7 @@ export function oneBodyRotation(T: ComplexMatrix, options: OneBodyRotationOption
     }
   }
   const { energies, V } = diagonalizeOneBody(T, { tolerance });
-  const block = orbitalRotation(V, options.name === undefined ? {} : { name: options.name });
+  const block = orbitalRotation(V, { arrangement: options.arrangement ?? 'rectangular', ...(options.name === undefined ? {} : { name: options.name }) });
   return { block, method: 'givens', energies, V, ...sortedView(energies) };
 }
 

@@ -8,7 +8,8 @@ import type { Block, UnitaryOp } from '../circuit/types.js';
 import { adjointMatrix } from '../linalg/adjointMatrix.js';
 import type { ComplexMatrix } from '../model/FermionModel.js';
 import { checkUnitary } from './internal/checkUnitary.js';
-import { givensDecomposition } from './internal/givensDecomposition.js';
+import { clementsDecomposition } from './internal/clementsDecomposition.js';
+import { reckDecomposition } from './internal/reckDecomposition.js';
 import { phasedGivensRotation } from './phasedGivensRotation.js';
 
 export interface OrbitalRotationOptions {
@@ -16,22 +17,29 @@ export interface OrbitalRotationOptions {
   readonly name?: string;
   /** Largest accepted max |(V†V − I)_ij|. Default 1e-9. */
   readonly tolerance?: number;
+  /**
+   * `rectangular` (default): the Clements mesh, n rotation layers. `triangular`: the Reck triangle, 2n − 3 layers.
+   * Both use n(n−1)/2 rotations.
+   */
+  readonly arrangement?: 'rectangular' | 'triangular';
 }
 
 /**
  * The orbital rotation U(V): U(V)† a_k† U(V) = Σ_j V_jk a_j†, U(V)|vac> = |vac>; equivalently its
  * one-particle action is V† (|k> ↦ Σ_j (V†)_jk |j>) and on N particles it acts by N×N minors of V†.
- * Built as V† = G_1† ⋯ G_L† D: single-mode phases p(φ_k) first, then exactly n(n−1)/2 calls of
- * `phased_givens_rotation` on adjacent modes in the triangular (Reck) arrangement (2n − 3 rotation layers when parallelised)
- * (Reck et al., Phys. Rev. Lett. 73, 58, 1994; Clements et al., Optica 3, 1460, 2016;
- * Kivlichan et al., Phys. Rev. Lett. 120, 110501, 2018). Rotations that happen to be the identity are kept,
- * so the structure depends on n only.
+ * Built from a factorisation V† = g_L ⋯ g_1 D: single-mode phases p(φ_k) (D) first, then exactly n(n−1)/2 calls of
+ * `phased_givens_rotation` (g_1 … g_L) on adjacent modes, in the rectangular arrangement of Clements et al.
+ * (Optica 3, 1460, 2016) or the triangular one of Reck et al. (Phys. Rev. Lett. 73, 58, 1994); as a fermionic
+ * circuit after Kivlichan et al. (Phys. Rev. Lett. 120, 110501, 2018). Rotations that happen to be the identity
+ * are kept, so the structure depends on n and the arrangement only.
  * @throws RangeError when V is not square or not unitary within the tolerance.
  */
 export function orbitalRotation(V: ComplexMatrix, options: OrbitalRotationOptions = {}): Block {
   checkUnitary(V, options.tolerance ?? 1e-9, 'orbitalRotation');
   const n = V.n;
-  const { phases, rotations } = givensDecomposition(adjointMatrix(V));
+  const arrangement = options.arrangement ?? 'rectangular';
+  const decompose = arrangement === 'rectangular' ? clementsDecomposition : reckDecomposition;
+  const { phases, rotations } = decompose(adjointMatrix(V));
   const ops: UnitaryOp[] = [];
   phases.forEach((phi, k) => {
     if (phi !== 0) ops.push(gate('p', [k], [phi]));
@@ -40,7 +48,7 @@ export function orbitalRotation(V: ComplexMatrix, options: OrbitalRotationOption
   return defineBlock(
     {
       name: options.name ?? 'orbital_rotation',
-      role: `orbital rotation U(V) on ${n} modes: phases, then ${(n * (n - 1)) / 2} adjacent Givens rotations (Reck triangle)`,
+      role: `orbital rotation U(V) on ${n} modes: phases, then ${(n * (n - 1)) / 2} adjacent Givens rotations (${arrangement} mesh)`,
       qubits: n,
     },
     ops,

@@ -4,6 +4,7 @@
  */
 import { ensureFits } from '../core/memoryBudget.js';
 import { InputError } from '../core/InputError.js';
+import { AMPLITUDE_PADDING_BYTES, allocateAmplitudes } from './internal/allocateAmplitudes.js';
 
 /** Largest supported qubit count: basis indices must stay below 2^31 for the kernels' bit arithmetic. */
 export const MAX_QUBITS = 30;
@@ -13,9 +14,9 @@ export interface StateVectorOptions {
   readonly memoryLimitBytes?: number;
 }
 
-/** Bytes needed for an n-qubit state: two Float64Arrays of 2^n entries. */
+/** Bytes needed for an n-qubit state: two Float64Arrays of 2^n entries (plus a little padding). */
 export function stateVectorBytes(qubits: number): number {
-  return 16 * 2 ** qubits;
+  return 16 * 2 ** qubits + AMPLITUDE_PADDING_BYTES;
 }
 
 function checkQubits(qubits: number, what: string, options: StateVectorOptions): void {
@@ -44,8 +45,7 @@ export class StateVector {
    */
   static zero(qubits: number, options: StateVectorOptions = {}): StateVector {
     checkQubits(qubits, 'StateVector.zero', options);
-    const size = 2 ** qubits;
-    const state = new StateVector(qubits, new Float64Array(size), new Float64Array(size));
+    const state = new StateVector(qubits, ...allocateAmplitudes(2 ** qubits));
     state.re[0] = 1;
     return state;
   }
@@ -55,7 +55,7 @@ export class StateVector {
     checkQubits(qubits, 'StateVector.basis', options);
     const size = 2 ** qubits;
     if (!Number.isInteger(index) || index < 0 || index >= size) throw new RangeError(`StateVector.basis: index ${index} out of range 0..${size - 1}`);
-    const state = new StateVector(qubits, new Float64Array(size), new Float64Array(size));
+    const state = new StateVector(qubits, ...allocateAmplitudes(size));
     state.re[index] = 1;
     return state;
   }
@@ -66,13 +66,19 @@ export class StateVector {
     const qubits = Math.log2(re.length);
     if (!Number.isInteger(qubits)) throw new RangeError(`StateVector.fromAmplitudes: length ${re.length} is not a power of two`);
     checkQubits(qubits, 'StateVector.fromAmplitudes', {});
-    return new StateVector(qubits, Float64Array.from(re), Float64Array.from(im));
+    const state = new StateVector(qubits, ...allocateAmplitudes(re.length));
+    state.re.set(re);
+    state.im.set(im);
+    return state;
   }
 
   /** An independent copy (memory checked first). */
   clone(options: StateVectorOptions = {}): StateVector {
     ensureFits(stateVectorBytes(this.qubits), `a copy of a ${this.qubits}-qubit state vector`, options.memoryLimitBytes);
-    return new StateVector(this.qubits, this.re.slice(), this.im.slice());
+    const copy = new StateVector(this.qubits, ...allocateAmplitudes(this.re.length));
+    copy.re.set(this.re);
+    copy.im.set(this.im);
+    return copy;
   }
 
   /** The 2-norm sqrt(Σ |amplitude|²). */

@@ -15,6 +15,18 @@ import { basisState, blockUnitary, simulateBlock } from './helpers/simulateBlock
 
 const unitaryArb = (maxN: number) =>
   fc.record({ n: fc.integer({ min: 1, max: maxN }), seed: fc.integer() }).map(({ n, seed }) => randomUnitary(n, seed));
+const arrangementArb = fc.constantFrom('rectangular' as const, 'triangular' as const);
+
+/** Rotation layers when every rotation starts as soon as both its modes are free. */
+function rotationLayers(block: Block): number {
+  const free = new Array<number>(block.qubits).fill(0);
+  for (const op of block.body.kind === 'plain' ? block.body.ops : []) {
+    if (op.kind !== 'call') continue;
+    const layer = Math.max(free[op.qubits[0]!]!, free[op.qubits[1]!]!) + 1;
+    free[op.qubits[0]!] = free[op.qubits[1]!] = layer;
+  }
+  return Math.max(0, ...free);
+}
 
 function givensCalls(block: Block): number {
   return block.body.kind === 'plain' ? block.body.ops.filter((op) => op.kind === 'call' && op.block === phasedGivensRotation).length : -1;
@@ -22,15 +34,22 @@ function givensCalls(block: Block): number {
 
 describe('orbitalRotation(V)', () => {
   it('has one-particle action V† on |k> = a_k†|vac> for Haar-random V, n ≤ 6', () => {
-    fc.assert(fc.property(unitaryArb(6), (V) => expectOneParticleAction(orbitalRotation(V), V)), { numRuns: 40 });
+    fc.assert(
+      fc.property(unitaryArb(6), arrangementArb, (V, arrangement) => expectOneParticleAction(orbitalRotation(V, { arrangement }), V)),
+      { numRuns: 40 },
+    );
   });
 
   it('satisfies U† a_k† U = Σ_j V_jk a_j† on the whole Fock space and fixes the vacuum, n ≤ 6', () => {
-    fc.assert(fc.property(unitaryArb(6), (V) => expectOperatorRelation(orbitalRotation(V), V)), { numRuns: 12 });
+    fc.assert(
+      fc.property(unitaryArb(6), arrangementArb, (V, arrangement) => expectOperatorRelation(orbitalRotation(V, { arrangement }), V)),
+      { numRuns: 12 },
+    );
   });
 
   it('satisfies the relation on random many-particle states', () => {
     expectRelationOnStates(orbitalRotation(randomUnitary(5, 11)), randomUnitary(5, 11), 3, 100);
+    expectRelationOnStates(orbitalRotation(randomUnitary(5, 12), { arrangement: 'triangular' }), randomUnitary(5, 12), 2, 200);
   });
 
   it('maps two particles on modes p < q to the 2×2 minors of V† (determinant rule)', () => {
@@ -58,13 +77,22 @@ describe('orbitalRotation(V)', () => {
 
   it('uses exactly n(n−1)/2 nearest-neighbour rotations (Reck et al., PRL 73, 58, 1994; Clements et al., Optica 3, 1460, 2016)', () => {
     for (let n = 1; n <= 8; n++) {
-      const block = orbitalRotation(randomUnitary(n, n));
-      expect(givensCalls(block)).toBe((n * (n - 1)) / 2);
-      // Each rotation holds one cry, and nothing else in the network does.
-      expect(blockCounts(block).get('cry') ?? 0).toBe((n * (n - 1)) / 2);
-      for (const op of block.body.kind === 'plain' ? block.body.ops : []) {
-        if (op.kind === 'call') expect(op.qubits[1]! - op.qubits[0]!).toBe(1);
+      for (const arrangement of ['rectangular', 'triangular'] as const) {
+        const block = orbitalRotation(randomUnitary(n, n), { arrangement });
+        expect(givensCalls(block)).toBe((n * (n - 1)) / 2);
+        // Each rotation holds one cry, and nothing else in the network does.
+        expect(blockCounts(block).get('cry') ?? 0).toBe((n * (n - 1)) / 2);
+        for (const op of block.body.kind === 'plain' ? block.body.ops : []) {
+          if (op.kind === 'call') expect(op.qubits[1]! - op.qubits[0]!).toBe(1);
+        }
       }
+    }
+  });
+
+  it('has n rotation layers in the rectangular mesh (Clements 2016) and 2n − 3 in the triangle (Reck 1994)', () => {
+    for (let n = 3; n <= 9; n++) {
+      expect(rotationLayers(orbitalRotation(randomUnitary(n, n)))).toBe(n);
+      expect(rotationLayers(orbitalRotation(randomUnitary(n, n), { arrangement: 'triangular' }))).toBe(2 * n - 3);
     }
   });
 

@@ -158,7 +158,7 @@ export class QasmDefinitions {
       role = block.role;
     }
     if (controls + negControls > 0) {
-      role += ` (first ${controls} control and ${negControls} negative-control qubits distributed; compute parts uncontrolled)`;
+      role += ` (${controls} control and ${negControls} negative-control qubits first, distributed to the body; compute parts stay uncontrolled)`;
     }
     const operands = [...controlNames, ...negNames, ...qubitNames];
     const signature = `${argumentList(params)}${operands.length > 0 ? ' ' + operands.join(', ') : ''}`;

@@ -4,5 +4,6 @@
  */
 import type { NativeKernel } from '../registerNativeKernel.js';
 import { phaseByValueKernel, PHASE_BY_VALUE_KERNEL } from '../kernels/phaseByValueKernel.js';
+import { ARITHMETIC_KERNELS } from '../kernels/registerArithmeticKernels.js';
 
-export const nativeKernels = new Map<string, NativeKernel>([[PHASE_BY_VALUE_KERNEL, phaseByValueKernel]]);
+export const nativeKernels = new Map<string, NativeKernel>([[PHASE_BY_VALUE_KERNEL, phaseByValueKernel], ...ARITHMETIC_KERNELS]);

@@ -1,0 +1,13 @@
+/**
+ * The native kernels of the fast-inversion stage (constant addition, multiplexed rotations), as registry entries
+ * that nativeKernelRegistry.ts adds to the built-in table.
+ */
+import type { NativeKernel } from '../registerNativeKernel.js';
+import { constantAdditionKernel, CONSTANT_ADDITION_KERNEL } from './constantAdditionKernel.js';
+import { MULTIPLEXED_RY_KERNEL, MULTIPLEXED_RZ_KERNEL, multiplexedRyKernel, multiplexedRzKernel } from './multiplexedRotationKernel.js';
+
+export const ARITHMETIC_KERNELS: readonly (readonly [string, NativeKernel])[] = [
+  [CONSTANT_ADDITION_KERNEL, constantAdditionKernel],
+  [MULTIPLEXED_RY_KERNEL, multiplexedRyKernel],
+  [MULTIPLEXED_RZ_KERNEL, multiplexedRzKernel],
+];
