@@ -4,6 +4,7 @@
  */
 import { Command } from 'commander';
 import { registerCheckCommand } from './commands/check.js';
+import { registerExactCommand } from './commands/exact.js';
 import { registerRunCommand } from './commands/run.js';
 
 export function buildProgram(): Command {
@@ -17,5 +18,6 @@ export function buildProgram(): Command {
     .configureOutput({ writeErr: (text) => process.stderr.write(text) });
   registerRunCommand(program);
   registerCheckCommand(program);
+  registerExactCommand(program);
   return program;
 }

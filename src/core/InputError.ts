@@ -3,7 +3,7 @@
  * The CLI prints its message and exits with code 2; anything else is an internal error (exit 1).
  */
 export class InputError extends Error {
-  override readonly name = 'InputError';
+  override readonly name: string = 'InputError';
   constructor(message: string) {
     super(message);
   }

@@ -5,6 +5,7 @@
 import { InputError } from '../core/InputError.js';
 
 export class QasmParseError extends InputError {
+  override readonly name: string = 'QasmParseError';
   /** Name of the source the text came from (usually a file path), as given to parseQasm. */
   readonly source: string;
   /** 1-based line of the offending token. */
@@ -17,8 +18,6 @@ export class QasmParseError extends InputError {
   /** `detail` is the message after the position; it usually starts with "expected …". */
   constructor(source: string, line: number, column: number, expected: string, detail: string) {
     super(`${source}:${line}:${column}: ${detail}`);
-    // InputError fixes the type of `name` to its own literal, so the subclass sets it at run time.
-    Object.defineProperty(this, 'name', { value: 'QasmParseError' });
     this.source = source;
     this.line = line;
     this.column = column;

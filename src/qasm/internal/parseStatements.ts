@@ -133,8 +133,10 @@ function keywordStatement(cursor: TokenCursor): Statement | undefined {
     case 'bit':
       return declaration(cursor);
     case 'qreg':
-    case 'creg':
-      return fail(token, `'${token.text === 'qreg' ? 'qubit' : 'bit'}[n] name;'`, `OpenQASM 2 declaration '${token.text}' is not supported; expected '${token.text === 'qreg' ? 'qubit' : 'bit'}[n] name;'`);
+    case 'creg': {
+      const replacement = `'${token.text === 'qreg' ? 'qubit' : 'bit'}[n] name;'`;
+      return fail(token, replacement, `OpenQASM 2 declaration '${token.text}' is not supported; expected ${replacement}`);
+    }
     case 'gate':
       return gateDefinition(cursor);
     case 'measure': {

@@ -53,7 +53,12 @@ function reduceExponent(call: GateCall, target: GateTarget, scope: CallScope): {
       power = exponent;
     } else {
       // The principal power of an inverted or already powered gate differs on the branch cut.
-      fail(m.position, `'inv @ pow(${exponent}) @ ${target.gate.name}' (non-integer pow innermost)`, `a non-integer pow(${exponent}) cannot be applied over inv or another pow of '${target.gate.name}'; write 'inv @ pow(${exponent}) @ ${target.gate.name}' instead`);
+      const rewrite = `inv @ pow(${exponent}) @ ${target.gate.name}`;
+      fail(
+        m.position,
+        `'${rewrite}' (non-integer pow innermost)`,
+        `a non-integer pow(${exponent}) cannot be applied over inv or another pow of '${target.gate.name}'; write '${rewrite}' instead`,
+      );
     }
   }
   if (!Number.isFinite(power)) fail(call.position, 'a finite combined power', 'the combined power of the modifiers is not finite');

@@ -29,7 +29,10 @@ export function measurementPlan(circuit: Circuit, bits: number): MeasurementPlan
       bitSources[op.bit] = op.qubit;
       continue;
     }
-    if (op.kind === 'reset' && !used.has(op.qubit)) continue;
+    if (op.kind === 'reset') {
+      if (!used.has(op.qubit)) continue;
+      direct = false;
+    }
     for (const q of touched(op)) {
       if (measured.has(q)) direct = false;
       used.add(q);

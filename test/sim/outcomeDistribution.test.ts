@@ -1,0 +1,97 @@
+// outcomeDistribution(circuit): exact outcome probabilities with terminal and mid-circuit
+// measurements and resets, against hand-computed values; bit order and branch limits.
+import { describe, expect, it } from 'vitest';
+import { CircuitBuilder } from '../../src/circuit/CircuitBuilder.js';
+import { gate } from '../../src/circuit/ops.js';
+import { InputError } from '../../src/core/InputError.js';
+import { outcomeDistribution } from '../../src/sim/outcomeDistribution.js';
+import { expectClose } from '../helpers/close.js';
+
+function expectOutcomes(actual: ReadonlyMap<string, number>, expected: Record<string, number>): void {
+  expect([...actual.keys()]).toEqual(Object.keys(expected).sort());
+  for (const [key, p] of Object.entries(expected)) expectClose(actual.get(key)!, p, 1e-14, key);
+}
+
+describe('outcomeDistribution(circuit)', () => {
+  it('Bell state measured: 00 and 11 with probability 1/2 each (Nielsen & Chuang §1.3.6)', () => {
+    const b = new CircuitBuilder();
+    b.qubits('q', 2);
+    b.bits('c', 2);
+    b.add(gate('h', [0]), gate('cx', [0, 1])).measure(0, 0).measure(1, 1);
+    expectOutcomes(outcomeDistribution(b.build()).outcomes, { '00': 0.5, '11': 0.5 });
+  });
+
+  it('concatenates registers in declaration order, first declared least significant; unmeasured bits read 0', () => {
+    const b = new CircuitBuilder();
+    b.qubits('q', 2);
+    b.bits('a', 1);
+    const bReg = b.bits('b', 2);
+    b.add(gate('x', [1])).measure(1, bReg[1]!).measure(0, 0);
+    // a[0] = 0 is bit 0, b[0] (never measured) = 0 is bit 1, b[1] = 1 is bit 2: "100".
+    const result = outcomeDistribution(b.build());
+    expect(result.bits).toBe(3);
+    expectOutcomes(result.outcomes, { '100': 1 });
+  });
+
+  it('a mid-circuit measurement decoheres: h; measure; h; measure gives four outcomes of 1/4', () => {
+    // Hand computation: the first outcome is 0 or 1 with 1/2; h on the collapsed qubit gives 1/2 each.
+    const b = new CircuitBuilder();
+    b.qubits('q', 1);
+    b.bits('c', 2);
+    b.add(gate('h', [0])).measure(0, 0).add(gate('h', [0])).measure(0, 1);
+    expectOutcomes(outcomeDistribution(b.build()).outcomes, { '00': 0.25, '01': 0.25, '10': 0.25, '11': 0.25 });
+  });
+
+  it('a measured qubit used as a control afterwards: ry(θ); measure q0; cx; measure q1', () => {
+    // P(q0 = 1) = sin²(θ/2); cx copies it to q1, so outcomes 00 and 11 (hand computation).
+    const theta = 1.1;
+    const b = new CircuitBuilder();
+    b.qubits('q', 2);
+    b.bits('c', 2);
+    b.add(gate('ry', [0], [theta])).measure(0, 0).add(gate('cx', [0, 1])).measure(1, 1);
+    expectOutcomes(outcomeDistribution(b.build()).outcomes, { '00': Math.cos(theta / 2) ** 2, '11': Math.sin(theta / 2) ** 2 });
+  });
+
+  it('reset returns a qubit to |0> without recording: x; cx; reset q0; measure both gives 10', () => {
+    const b = new CircuitBuilder();
+    b.qubits('q', 2);
+    b.bits('c', 2);
+    b.add(gate('x', [0]), gate('cx', [0, 1]), { kind: 'reset', qubit: 0 }).measure(0, 0).measure(1, 1);
+    expectOutcomes(outcomeDistribution(b.build()).outcomes, { '10': 1 });
+  });
+
+  it('reset of an entangled qubit leaves the partner mixed: h; cx; reset q0; h q1; measure both', () => {
+    // After the reset q0 = |0> and q1 is the mixed state I/2; h keeps I/2, so q1 reads 0 or 1 with 1/2.
+    const b = new CircuitBuilder();
+    b.qubits('q', 2);
+    b.bits('c', 2);
+    b.add(gate('h', [0]), gate('cx', [0, 1]), { kind: 'reset', qubit: 0 }, gate('h', [1])).measure(0, 0).measure(1, 1);
+    expectOutcomes(outcomeDistribution(b.build()).outcomes, { '00': 0.5, '10': 0.5 });
+  });
+
+  it('a reset before any gate is a no-op and keeps the direct path exact', () => {
+    const b = new CircuitBuilder();
+    b.qubits('q', 1);
+    b.bits('c', 1);
+    b.add({ kind: 'reset', qubit: 0 }, gate('ry', [0], [0.5])).measure(0, 0);
+    expectOutcomes(outcomeDistribution(b.build()).outcomes, { '0': Math.cos(0.25) ** 2, '1': Math.sin(0.25) ** 2 });
+  });
+
+  it('refuses with an InputError suggesting shots when branches exceed maxBranches', () => {
+    const b = new CircuitBuilder();
+    b.qubits('q', 1);
+    b.bits('c', 3);
+    for (let k = 0; k < 3; k++) b.add(gate('h', [0])).measure(0, k);
+    const circuit = b.build();
+    expect(() => outcomeDistribution(circuit, { maxBranches: 4 })).toThrow(InputError);
+    expect(() => outcomeDistribution(circuit, { maxBranches: 4 })).toThrow(/--shots/);
+    expect(outcomeDistribution(circuit, { maxBranches: 8 }).outcomes.size).toBe(8);
+  });
+
+  it('a circuit without classical bits has the single empty outcome', () => {
+    const b = new CircuitBuilder();
+    b.qubits('q', 1);
+    b.add(gate('h', [0]));
+    expectOutcomes(outcomeDistribution(b.build()).outcomes, { '': 1 });
+  });
+});
