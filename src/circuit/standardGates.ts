@@ -104,8 +104,9 @@ const GATES: readonly StandardGate[] = [
   gate('cphase', 1, 2, 1, false, phaseGate),
   gate('id', 0, 1, 0, true, () => unitary(IDENTITY)),
   gate('u1', 1, 1, 0, false, phaseGate),
-  gate('u2', 2, 1, 0, false, (p) => unitary(uMatrix(Math.PI / 2, p0(p), p1(p), -(p0(p) + p1(p)) / 2))),
-  gate('u3', 3, 1, 0, false, (p) => unitary(uMatrix(p0(p), p1(p), p2(p), -(p1(p) + p2(p)) / 2))),
+  // stdgates.inc (from memory): u2 = gphase(−(φ+λ+π/2)/2); U(π/2, φ, λ) and u3 = gphase(−(φ+λ+θ)/2); U(θ, φ, λ).
+  gate('u2', 2, 1, 0, false, (p) => unitary(uMatrix(Math.PI / 2, p0(p), p1(p), -(p0(p) + p1(p) + Math.PI / 2) / 2))),
+  gate('u3', 3, 1, 0, false, (p) => unitary(uMatrix(p0(p), p1(p), p2(p), -(p1(p) + p2(p) + p0(p)) / 2))),
 ];
 
 const BY_NAME: ReadonlyMap<string, StandardGate> = new Map(GATES.map((g) => [g.name, g]));

@@ -26,7 +26,7 @@ export interface GreenOptions {
   readonly z: readonly Complex[];
   /** [i, j] entries to compute; default all n² in row-major order. */
   readonly pairs?: readonly (readonly [number, number])[];
-  /** Continued fractions stop when 8 more levels change no value by more than this (relative). Default 1e-12. */
+  /** Continued fractions stop when 8 more levels change no value on the z list by more than this, relative to the largest |value|. Default 1e-8 (small sectors exhaust their Krylov space and are exact). */
   readonly tolerance?: number;
   /** Lanczos steps per continued fraction at most. Default 3000. */
   readonly maxSteps?: number;
@@ -70,7 +70,7 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
   const n = model.modes;
   const pairs = options.pairs ?? allPairs(n);
   const nz = options.z.length;
-  const tol = options.tolerance ?? 1e-12;
+  const tol = options.tolerance ?? 1e-8;
   const maxSteps = options.maxSteps ?? 3000;
   const e0 = ground.energy;
   const real = ground.hamiltonian.real && ground.states.every((s) => s.im === null);

@@ -68,10 +68,16 @@ describe('standard gate matrices (OpenQASM 3.0 stdgates.inc, from memory)', () =
     expectMatrixClose(simulated('ccx', [0, 1, 2], []), matrixFromRows(ccx), 'ccx', 1e-15);
   });
 
-  it('u2 and u3 equal U(π/2, φ, λ) and U(θ, φ, λ) up to a global phase', () => {
-    // stdgates.inc defines both as gphase(·); U(…). The phase's exact form is not checked here (see report).
-    expectMatrixClose(phaseFixed(simulated('u2', [0], [0.4, -0.8])), phaseFixed(toComplexMatrix(U(Math.PI / 2, 0.4, -0.8))), 'u2');
-    expectMatrixClose(phaseFixed(simulated('u3', [0], [1.3, 0.4, -0.8])), phaseFixed(toComplexMatrix(U(1.3, 0.4, -0.8))), 'u3');
+  it('u2 and u3 equal gphase(−(φ+λ+π/2)/2) U(π/2, φ, λ) and gphase(−(φ+λ+θ)/2) U(θ, φ, λ)', () => {
+    // stdgates.inc (from memory): gate u2(φ, λ) q { gphase(-(φ+λ+π/2)/2); U(π/2, φ, λ) q; }
+    //                             gate u3(θ, φ, λ) q { gphase(-(φ+λ+θ)/2); U(θ, φ, λ) q; }
+    const phased = (m: ComplexMatrix, angle: number): ComplexMatrix => {
+      const [c, s] = [Math.cos(angle), Math.sin(angle)];
+      return { n: m.n, re: m.re.map((v, k) => v * c - m.im[k]! * s), im: m.im.map((v, k) => m.re[k]! * s + v * c) };
+    };
+    expectMatrixClose(simulated('u2', [0], [0.4, -0.8]), phased(toComplexMatrix(U(Math.PI / 2, 0.4, -0.8)), -(0.4 - 0.8 + Math.PI / 2) / 2), 'u2');
+    expectMatrixClose(simulated('u3', [0], [1.3, 0.4, -0.8]), phased(toComplexMatrix(U(1.3, 0.4, -0.8)), -(0.4 - 0.8 + 1.3) / 2), 'u3');
+    expectMatrixClose(phaseFixed(simulated('u3', [0], [1.3, 0.4, -0.8])), phaseFixed(toComplexMatrix(U(1.3, 0.4, -0.8))), 'u3 up to phase');
   });
 
   it('gphase(θ) multiplies the whole state by e^{iθ}', () => {
