@@ -3,10 +3,13 @@
  * and inside the high modes act as Kronecker factors (row and column sweeps over contiguous memory);
  * densities form a stored diagonal; all other terms go through a per-state bit-operation path.
  */
+import { availableParallelism } from 'node:os';
 import type { FermionModel } from '../model/FermionModel.js';
 import { applyLadders } from './internal/bits.js';
 import { hamiltonianTerms, type HamiltonianTerms, type Hop } from './internal/hamiltonianTerms.js';
-import type { CVec } from './internal/vec.js';
+import { applyRealRows, type KernelBlock } from './internal/realKernel.js';
+import { isShared, rowThreads } from './internal/rowThreads.js';
+import { sharedFloat64, type CVec } from './internal/vec.js';
 import type { FockSector } from './fockSector.js';
 import { sectorIndex } from './sectorIndex.js';
 
@@ -17,6 +20,14 @@ interface HopTable {
   readonly src: Int32Array;
   readonly re: Float64Array;
   readonly im: Float64Array;
+}
+
+/** Sectors from this dimension on apply a real H on all cores by default (worker start-up costs ~0.1 s). */
+export const PARALLEL_DIMENSION = 50_000;
+
+export interface SectorHamiltonianOptions {
+  /** Threads for products of a real H (the caller plus threads − 1 workers). Default: all cores from PARALLEL_DIMENSION on, else 1. */
+  readonly threads?: number;
 }
 
 /** Largest dimension × generic-term count for which the generic terms are stored as a sparse matrix. */
@@ -30,6 +41,8 @@ export interface SectorHamiltonian {
   readonly diagonal: Float64Array;
   /** y = H x (y is overwritten; x and y must not alias; y complex whenever x is or H is complex). */
   apply(x: CVec, y: CVec): void;
+  /** Ends the worker threads, if any; later products run on the calling thread. */
+  release(): void;
 }
 
 function hopTable(patterns: Int32Array, rank: Int32Array, hops: readonly Hop[]): HopTable {
@@ -96,15 +109,19 @@ function blockDiagonal(terms: HamiltonianTerms, sector: FockSector, out: Float64
   }
 }
 
-/** Builds the matrix-free sector Hamiltonian (tables cost O(2^(modes/2)·hops); diagonal O(dim)). */
-export function sectorHamiltonian(model: FermionModel, sector: FockSector): SectorHamiltonian {
+/**
+ * Builds the matrix-free sector Hamiltonian (tables cost O(2^(modes/2)·hops); diagonal O(dim)).
+ * Products of a real H with SharedArrayBuffer-backed vectors (zeroVec's, for large sectors) are split
+ * by rows among threads, with the same bytes out as on one thread.
+ */
+export function sectorHamiltonian(model: FermionModel, sector: FockSector, options: SectorHamiltonianOptions = {}): SectorHamiltonian {
   const terms = hamiltonianTerms(model, sector.spec.lowModes);
   const { modes, electrons, lowModes: h } = sector.spec;
   const feasible = Math.min(h, electrons) - Math.max(0, electrons - (modes - h)) + 1;
   if (!terms.conservesLowCount && sector.blocks.length < feasible) {
     throw new Error('sectorHamiltonian: H changes the low-mode electron count; use the electron-number sector');
   }
-  const diagonal = new Float64Array(sector.dimension);
+  const diagonal = sharedFloat64(sector.dimension);
   blockDiagonal(terms, sector, diagonal);
   const lowTables = new Map<number, HopTable>();
   const highTables = new Map<number, HopTable>();
@@ -116,35 +133,27 @@ export function sectorHamiltonian(model: FermionModel, sector: FockSector): Sect
   }
   const lowModes = sector.spec.lowModes;
 
+  const kernelBlocks: KernelBlock[] = sector.blocks.map((block) => {
+    const ht = highTables.get(sector.spec.electrons - block.lowCount)!;
+    const lt = lowTables.get(block.lowCount)!;
+    return {
+      D: block.highPatterns.length,
+      nLow: block.lowPatterns.length,
+      offset: block.offset,
+      hStart: ht.start,
+      hSrc: ht.src,
+      hRe: ht.re,
+      lStart: lt.start,
+      lSrc: lt.src,
+      lRe: lt.re,
+    };
+  });
+  const threads = Math.max(1, Math.floor(options.threads ?? (sector.dimension >= PARALLEL_DIMENSION ? availableParallelism() : 1)));
+  let pool = threads > 1 && terms.real ? rowThreads(kernelBlocks, diagonal, threads) : null;
+
   function applyReal(x: Float64Array, y: Float64Array): void {
-    for (const block of sector.blocks) {
-      const D = block.highPatterns.length;
-      const nLow = block.lowPatterns.length;
-      const off = block.offset;
-      const ht = highTables.get(sector.spec.electrons - block.lowCount)!;
-      const hStart = ht.start;
-      const hSrc = ht.src;
-      const hRe = ht.re;
-      for (let r = 0; r < nLow; r++) {
-        const base = off + r * D;
-        for (let d = 0; d < D; d++) {
-          let acc = diagonal[base + d]! * x[base + d]!;
-          const end = hStart[d + 1]!;
-          for (let e = hStart[d]!; e < end; e++) acc += hRe[e]! * x[base + hSrc[e]!]!;
-          y[base + d] = acc;
-        }
-      }
-      const lt = lowTables.get(block.lowCount)!;
-      for (let dr = 0; dr < nLow; dr++) {
-        const d0 = off + dr * D;
-        const end = lt.start[dr + 1]!;
-        for (let e = lt.start[dr]!; e < end; e++) {
-          const c = lt.re[e]!;
-          const so = off + lt.src[e]! * D;
-          for (let t = 0; t < D; t++) y[d0 + t]! += c * x[so + t]!;
-        }
-      }
-    }
+    if (pool !== null && isShared(x) && isShared(y)) pool.apply(x, y);
+    else applyRealRows(kernelBlocks, diagonal, x, y, 0, 1);
   }
 
   function applyComplex(xr: Float64Array, xi: Float64Array, yr: Float64Array, yi: Float64Array): void {
@@ -280,6 +289,10 @@ export function sectorHamiltonian(model: FermionModel, sector: FockSector): Sect
         applyComplex(x.re, xi, y.re, y.im);
       }
       applyGeneric(x, y);
+    },
+    release(): void {
+      pool?.release();
+      pool = null;
     },
   };
 }

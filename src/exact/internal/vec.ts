@@ -1,6 +1,6 @@
 /**
- * Complex vectors as separate real and imaginary Float64Arrays (im = null for a real vector) and the
- * few BLAS-1 operations the Lanczos codes need.
+ * Complex vectors as separate real and imaginary Float64Arrays (im = null for a real vector; large
+ * ones shared with worker threads) and the few BLAS-1 operations the Lanczos codes need.
  */
 
 /** A vector in a Fock sector; `im` is null when every entry is real. */
@@ -9,8 +9,16 @@ export interface CVec {
   readonly im: Float64Array | null;
 }
 
+/** Vectors from this length on live in SharedArrayBuffers, so worker threads can share them. */
+export const SHARED_LENGTH = 4096;
+
+/** A zero Float64Array, SharedArrayBuffer-backed from SHARED_LENGTH on. */
+export function sharedFloat64(length: number): Float64Array {
+  return length >= SHARED_LENGTH ? new Float64Array(new SharedArrayBuffer(8 * length)) : new Float64Array(length);
+}
+
 export function zeroVec(dim: number, complex: boolean): CVec {
-  return { re: new Float64Array(dim), im: complex ? new Float64Array(dim) : null };
+  return { re: sharedFloat64(dim), im: complex ? sharedFloat64(dim) : null };
 }
 
 export function copyVec(x: CVec): CVec {

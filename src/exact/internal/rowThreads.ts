@@ -1,0 +1,63 @@
+/**
+ * rowThreads: splits realKernel's rows between the calling thread and worker threads sharing the
+ * vectors (SharedArrayBuffer); the caller blocks on Atomics.wait until every worker has flagged done.
+ * Workers are unref'd (they never keep the process alive) and end with release().
+ */
+import { createRequire } from 'node:module';
+import { pathToFileURL } from 'node:url';
+import { Worker } from 'node:worker_threads';
+import { applyRealRows, type KernelBlock } from './realKernel.js';
+
+/** Longest wait for a worker's share of one product before giving up. */
+const WAIT_MS = 120_000;
+
+export interface RowThreads {
+  /** y = H x with both vectors SharedArrayBuffer-backed. */
+  apply(x: Float64Array, y: Float64Array): void;
+  release(): void;
+}
+
+/** Worker bootstrap: from TypeScript sources (tsx, vitest) register tsx's loader first. */
+function workerCode(): string {
+  const fromSource = import.meta.url.endsWith('.ts');
+  const url = new URL(fromSource ? './kernelWorker.ts' : './kernelWorker.js', import.meta.url).href;
+  if (!fromSource) return `import(${JSON.stringify(url)});`;
+  const api = pathToFileURL(createRequire(import.meta.url).resolve('tsx/esm/api')).href;
+  return `import(${JSON.stringify(api)}).then((m) => { m.register(); return import(${JSON.stringify(url)}); });`;
+}
+
+export function isShared(a: Float64Array): boolean {
+  return a.buffer instanceof SharedArrayBuffer;
+}
+
+/** `threads` ≥ 2 threads in all: the caller plus threads − 1 workers; `diagonal` must be shared. */
+export function rowThreads(blocks: readonly KernelBlock[], diagonal: Float64Array, threads: number): RowThreads {
+  const workers = threads - 1;
+  const done = new Int32Array(new SharedArrayBuffer(4 * workers));
+  const code = workerCode();
+  const pool = Array.from({ length: workers }, (_, w) => {
+    const worker = new Worker(code, { eval: true });
+    worker.unref();
+    worker.postMessage({ setup: { blocks, diagonal, part: w + 1, parts: threads, done, slot: w } });
+    return worker;
+  });
+  let released = false;
+  return {
+    apply(x: Float64Array, y: Float64Array): void {
+      if (released) throw new Error('rowThreads: used after release');
+      for (let w = 0; w < workers; w++) {
+        Atomics.store(done, w, 0);
+        pool[w]!.postMessage({ x, y });
+      }
+      applyRealRows(blocks, diagonal, x, y, 0, threads);
+      for (let w = 0; w < workers; w++) {
+        if (Atomics.wait(done, w, 0, WAIT_MS) === 'timed-out') throw new Error('rowThreads: a worker did not answer');
+        if (Atomics.load(done, w) !== 1) throw new Error('rowThreads: a worker failed');
+      }
+    },
+    release(): void {
+      released = true;
+      for (const worker of pool) void worker.terminate();
+    },
+  };
+}
