@@ -26,7 +26,12 @@ export interface GreenOptions {
   readonly z: readonly Complex[];
   /** [i, j] entries to compute; default all n² in row-major order. */
   readonly pairs?: readonly (readonly [number, number])[];
-  /** Continued fractions stop when 8 more levels change no value on the z list by more than this, relative to the largest |value|. Default 1e-8 (small sectors exhaust their Krylov space and are exact). */
+  /**
+   * Continued fractions stop when CHECK_EVERY more levels change no value on the z list by more than
+   * this, relative to the largest |value| there. Default 1e-6 (a thousandth of a percent of the
+   * peak; the change tracks the remaining error within a factor ~2). Small sectors exhaust their
+   * Krylov space first and are exact whatever the tolerance.
+   */
   readonly tolerance?: number;
   /** Lanczos steps per continued fraction at most. Default 3000. */
   readonly maxSteps?: number;
@@ -34,6 +39,11 @@ export interface GreenOptions {
   readonly onProgress?: (done: number, total: number) => void;
   readonly memoryLimit?: number;
 }
+
+/** Default relative tolerance of the continued fractions (see GreenOptions.tolerance). */
+export const DEFAULT_GREEN_TOLERANCE = 1e-6;
+/** Lanczos levels between two convergence checks of a continued fraction. */
+const CHECK_EVERY = 8;
 
 /** Values of G_ij at each requested z. */
 export interface GreenEntry {
@@ -70,7 +80,7 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
   const n = model.modes;
   const pairs = options.pairs ?? allPairs(n);
   const nz = options.z.length;
-  const tol = options.tolerance ?? 1e-8;
+  const tol = options.tolerance ?? DEFAULT_GREEN_TOLERANCE;
   const maxSteps = options.maxSteps ?? 3000;
   const e0 = ground.energy;
   const real = ground.hamiltonian.real && ground.states.every((s) => s.im === null);
@@ -125,7 +135,7 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
       keepBasis: dim <= KEEP_BASIS_DIMENSION,
       complex: complex || !target.hamiltonian.real,
       stop: (alpha, beta) => {
-        if (alpha.length % 8 !== 0) return false;
+        if (alpha.length % CHECK_EVERY !== 0) return false;
         const now = evaluate(continuedFraction(weight, alpha, beta, sign, e0));
         let change = 0;
         let size = 0;

@@ -127,6 +127,17 @@ describe('pauliLcu(sum)', () => {
 });
 
 describe('ladderEncoding(mode, dagger, modes)', () => {
+  it('encodes a_j and a_j† exactly for every mode of registers up to 6 modes', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 6 }).chain((n) => fc.tuple(fc.constant(n), fc.integer({ min: 0, max: n - 1 }), fc.boolean())), ([n, j, dagger]) => {
+        const e = ladderEncoding(j, dagger, n);
+        expect(e.label).toBe(`${dagger ? 'creation' : 'annihilation'} ${j}`);
+        expect(verifyEncoding(e).maxError).toBeLessThan(TOL);
+      }),
+      { numRuns: 25 },
+    );
+  });
+
   it('has α = 1 and one ancilla, and {a_i, a_j†} = δ_ij from the encoded operators (Jordan & Wigner 1928)', () => {
     const modes = 3;
     for (let i = 0; i < modes; i++) {

@@ -36,13 +36,16 @@ function randomHermitian(seed: number, n: number): ComplexMatrix {
   return { n, re, im };
 }
 
+// The references are checked at a strict continued-fraction tolerance (the default is 1e-6).
+const STRICT = { tolerance: 1e-13 };
+
 describe('greensFunction(model, ground, options)', () => {
   it('gives the Hubbard atom G = ½/(z + U/2) + ½/(z − U/2) at half filling, averaging the degenerate level', () => {
     const U = 3;
     const model = hubbard({ sites: 1, hopping: 0, interaction: U, chemicalPotential: U / 2 });
     const ground = groundLevel(model);
     const zs = [{ re: -2.1, im: 0.1 }, { re: 0.4, im: 0.05 }, { re: 1.3, im: 1 }];
-    const g = greensFunction(model, ground, { z: zs, pairs: [[0, 0], [1, 1], [0, 1]] });
+    const g = greensFunction(model, ground, { ...STRICT, z: zs, pairs: [[0, 0], [1, 1], [0, 1]] });
     zs.forEach((z, k) => {
       // Hubbard 1963, Proc. R. Soc. A 276, 238 (atomic limit): ½/(z + U/2) + ½/(z − U/2).
       const a = div(0.5, 0, z.re + U / 2, z.im);
@@ -67,7 +70,7 @@ describe('greensFunction(model, ground, options)', () => {
       [-(c / 2 + t), (1 - (4 * t) / c) / 4],
     ];
     const zs = [{ re: -3, im: 0.1 }, { re: 0.2, im: 0.3 }, { re: 2.5, im: 0.01 }];
-    const g = greensFunction(model, ground, { z: zs, pairs: [[0, 0]] });
+    const g = greensFunction(model, ground, { ...STRICT, z: zs, pairs: [[0, 0]] });
     zs.forEach((z, k) => {
       let er = 0;
       let ei = 0;
@@ -86,7 +89,7 @@ describe('greensFunction(model, ground, options)', () => {
       const model = quadraticModel(T, N);
       const ground = groundLevel(model);
       const z = { re: 0.37, im: 0.21 };
-      const g = greenMatrixAt(model, ground, z);
+      const g = greenMatrixAt(model, ground, z, STRICT);
       // Fetter & Walecka, Quantum Theory of Many-Particle Systems (1971): G0(z) = (z − T)⁻¹.
       const ref = nonInteractingGreen(T, z);
       for (let e = 0; e < n * n; e++) expectComplexClose([g.re[e]!, g.im[e]!], [ref.re[e]!, ref.im[e]!], 1e-10, `G[${e}] seed ${seed}`);
@@ -98,7 +101,7 @@ describe('greensFunction(model, ground, options)', () => {
     const ground = groundLevel(model);
     const L = 3;
     for (const z of [{ re: 0.3, im: 0.1 }, { re: -1.2, im: 0.5 }]) {
-      const s = selfEnergy(model.oneBody, greenMatrixAt(model, ground, z), z);
+      const s = selfEnergy(model.oneBody, greenMatrixAt(model, ground, z, STRICT), z);
       const n = model.modes;
       for (let i = 0; i < n; i++) {
         for (let j = 0; j < n; j++) {
@@ -124,7 +127,7 @@ describe('greensFunction(model, ground, options)', () => {
           const model = randomModel(seed, n, N, complex, n > 6 ? 0.1 : 0.3);
           const z = { re: zr, im: zi };
           const ref = denseGreen(model, z);
-          const g = greenMatrixAt(model, groundLevel(model), z);
+          const g = greenMatrixAt(model, groundLevel(model), z, STRICT);
           for (let i = 0; i < n; i++) {
             for (let j = 0; j < n; j++) {
               expectComplexClose([g.re[i * n + j]!, g.im[i * n + j]!], [ref[i]![j]!.re, ref[i]![j]!.im], 1e-9, `G_${i}${j}`);

@@ -27,10 +27,10 @@ function invert(a: ComplexMatrix): ComplexMatrix {
     const pr = re[c * n + c]! / den;
     const pi = -im[c * n + c]! / den;
     for (let r = 0; r < n; r++) {
-      // Row r −= f · row c with f = a_rc / a_cc (or row c scaled by 1/a_cc when r = c).
-      const fr = r === c ? 0 : re[r * n + c]! * pr - im[r * n + c]! * pi;
-      const fi = r === c ? 0 : re[r * n + c]! * pi + im[r * n + c]! * pr;
       if (r === c) continue;
+      // Row r −= f · row c with f = a_rc / a_cc.
+      const fr = re[r * n + c]! * pr - im[r * n + c]! * pi;
+      const fi = re[r * n + c]! * pi + im[r * n + c]! * pr;
       for (const [xr, xi] of [[re, im], [ir, ii]] as const) {
         for (let k = 0; k < n; k++) {
           const cr = xr[c * n + k]!;

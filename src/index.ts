@@ -1,0 +1,85 @@
+/**
+ * The public library API of polewright, by explicit list, stage by stage in pipeline order.
+ */
+export { InputError, isInputError } from './core/InputError.js';
+export { seededRandom, type RandomSource } from './core/seededRandom.js';
+
+export type { Angle, AngleExpr } from './circuit/angle.js';
+export { param, evaluateAngle } from './circuit/angle.js';
+export type { Block, BlockBody, CallOp, Circuit, GateOp, Modifiers, Op, Register, UnitaryOp } from './circuit/types.js';
+export { STANDARD_GATES, standardGate } from './circuit/standardGates.js';
+export { gate, call, controlled, inverted, repeated } from './circuit/ops.js';
+export { defineBlock, defineConjugatedBlock } from './circuit/defineBlock.js';
+export { CircuitBuilder, qubitCount, bitCount } from './circuit/CircuitBuilder.js';
+export { gateCounts, blockCounts, totalGates, countsToObject, type GateCounts } from './circuit/gateCounts.js';
+export { depthBound } from './circuit/depthBound.js';
+export { flatten, flattenBlock, type FlatOp } from './circuit/flatten.js';
+
+export type { ComplexMatrix } from './linalg/ComplexMatrix.js';
+export { hermitianEigen } from './linalg/hermitianEigen.js';
+
+export type { FermionModel, TwoBodyTerm, FrequencyGrid } from './model/FermionModel.js';
+export { parseModel } from './model/parseModel.js';
+export { loadModelFile } from './model/loadModelFile.js';
+export { describeModel } from './model/describeModel.js';
+
+export type { FermionOperator, FermionTerm, LadderOp } from './operators/FermionOperator.js';
+export type { PauliSum, PauliTerm } from './operators/PauliSum.js';
+export { ladder } from './operators/ladder.js';
+export { normalOrder } from './operators/normalOrder.js';
+export { adjointFermion } from './operators/adjointFermion.js';
+export { commutatorFermion } from './operators/commutatorFermion.js';
+export { anticommutatorFermion } from './operators/anticommutatorFermion.js';
+export { modelHamiltonian } from './operators/modelHamiltonian.js';
+export { jordanWigner } from './operators/jordanWigner.js';
+export { simplifyPauli } from './operators/simplifyPauli.js';
+export { pauliSumMatrix } from './operators/pauliSumMatrix.js';
+export { fermionOperatorMatrix } from './operators/fermionOperatorMatrix.js';
+
+export { groundLevel } from './exact/groundLevel.js';
+export { greensFunction } from './exact/greensFunction.js';
+export { greenMatrixAt } from './exact/greenMatrixAt.js';
+export { nonInteractingGreen } from './exact/nonInteractingGreen.js';
+export { selfEnergy } from './exact/selfEnergy.js';
+export { spectralFunction } from './exact/spectralFunction.js';
+export { lehmannForm } from './exact/lehmannForm.js';
+export { solveExact } from './exact/solveExact.js';
+
+export type { BlockEncoding, AncillaRegister, CostNote } from './blocks/BlockEncoding.js';
+export { productEncoding } from './blocks/combine/productEncoding.js';
+export { linearCombination } from './blocks/combine/linearCombination.js';
+export { adjointEncoding } from './blocks/combine/adjointEncoding.js';
+export { controlledEncoding } from './blocks/combine/controlledEncoding.js';
+export { tensorEncoding } from './blocks/combine/tensorEncoding.js';
+export { phasedEncoding } from './blocks/combine/phasedEncoding.js';
+export { shiftedEncoding } from './blocks/combine/shiftedEncoding.js';
+export { identityEncoding } from './blocks/combine/identityEncoding.js';
+export { ladderEncoding } from './blocks/build/ladderEncoding.js';
+export { pauliLcu } from './blocks/build/pauliLcu.js';
+export { modelEncodings } from './blocks/build/modelEncodings.js';
+export { prepareAmplitudes } from './blocks/prepareAmplitudes.js';
+export { uniformlyControlledRotation } from './blocks/uniformlyControlledRotation.js';
+
+export { orbitalRotation } from './rotations/orbitalRotation.js';
+export { fermionicFourierTransform } from './rotations/fermionicFourierTransform.js';
+export { diagonalizeOneBody } from './rotations/diagonalizeOneBody.js';
+export { oneBodyRotation } from './rotations/oneBodyRotation.js';
+export { slaterDeterminant } from './rotations/slaterDeterminant.js';
+
+export { StateVector } from './sim/StateVector.js';
+export { simulateState } from './sim/simulateState.js';
+export { applyCircuit } from './sim/applyCircuit.js';
+export { applyUnitaryOps } from './sim/applyUnitaryOps.js';
+export { probabilities } from './sim/probabilities.js';
+export { sampleOutcomes } from './sim/sampleOutcomes.js';
+export { expectationOfBlock } from './sim/expectationOfBlock.js';
+export { circuitMatrix } from './sim/circuitMatrix.js';
+export { outcomeDistribution } from './sim/outcomeDistribution.js';
+export { registerNativeKernel, type NativeKernel } from './sim/registerNativeKernel.js';
+
+export { writeQasm } from './qasm/writeQasm.js';
+export { parseQasm } from './qasm/parseQasm.js';
+export { QasmParseError, isQasmParseError } from './qasm/QasmParseError.js';
+
+export { verifyEncoding } from './verify/verifyEncoding.js';
+export { checkModelBlocks } from './verify/checkModelBlocks.js';
