@@ -235,6 +235,7 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
       }
     }
   }
+  for (const entry of sectors.values()) entry.hamiltonian.release();
   const d = ground.states.length;
   const entries = pairs.map(([i, j]) => {
     const a = acc.get(`${i},${j}`);

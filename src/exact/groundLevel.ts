@@ -1,11 +1,12 @@
 /**
  * groundLevel: the lowest level of a model in its ground sector by Lanczos with deflation. Each
- * eigenvector is found by a Lanczos run kept orthogonal to the ones found before; runs continue
+ * eigenvector is found by Lanczos runs kept orthogonal to the ones found before; runs continue
  * until one converges above E0 + degeneracy tolerance, which also gives the gap.
  */
 import type { FermionModel } from '../model/FermionModel.js';
 import { fockSector, type FockSector } from './fockSector.js';
-import { combine, combineByRerun, lanczos, type LanczosSpec } from './internal/lanczos.js';
+import { memoryLimit } from '../core/memoryBudget.js';
+import { combine, combineByRerun, combineCompact, lanczos, type LanczosSpec } from './internal/lanczos.js';
 import { groundSectorSpec } from './internal/modelSectors.js';
 import { randomVector } from './internal/randomVector.js';
 import { ensureSectorFits } from './internal/sectorMemory.js';
@@ -25,7 +26,17 @@ export interface GroundLevelOptions {
   readonly seed?: number;
   /** Byte limit (default: memoryBudget's limit). */
   readonly memoryLimit?: number;
+  /**
+   * How each Lanczos run keeps its vectors: 'full' (stored, fully reorthogonalised), 'compact'
+   * (single-precision copies, combined then refined by a further cycle), 'rerun' (none: the
+   * recurrence runs again to form the eigenvector). Default: 'full' up to KEEP_BASIS_DIMENSION,
+   * else 'compact' when at least MIN_COMPACT_STEPS single-precision vectors fit in a quarter of
+   * the memory limit (at most 1 GiB), else 'rerun'.
+   */
+  readonly basis?: BasisMode;
 }
+
+export type BasisMode = 'full' | 'compact' | 'rerun';
 
 export interface GroundLevel {
   readonly sector: FockSector;
@@ -45,6 +56,10 @@ export interface GroundLevel {
 /** Sectors up to this size keep their Lanczos basis (full reorthogonalisation); larger ones rerun. */
 export const KEEP_BASIS_DIMENSION = 20000;
 const MAX_CYCLES = 30;
+/** Fewest single-precision vectors per cycle worth the 'compact' mode. */
+export const MIN_COMPACT_STEPS = 60;
+/** A 'compact' first cycle stops at this relative residual estimate: its eigenvector is only single-precision accurate. */
+const COMPACT_FLOOR = 1e-7;
 
 interface Lowest {
   value: number;
@@ -63,8 +78,15 @@ export function groundLevel(model: FermionModel, options: GroundLevelOptions = {
   const spec = groundSectorSpec(model);
   const dim = sectorDimension(spec);
   const complexModel = !isRealModel(model);
-  const keepBasis = dim <= KEEP_BASIS_DIMENSION;
-  ensureSectorFits(dim, (keepBasis ? Math.min(dim, maxSteps) : 0) + 8, complexModel, 'the ground-state sector', options.memoryLimit);
+  const compactSteps = Math.min(
+    maxSteps,
+    Math.floor(Math.min(2 ** 30, 0.25 * memoryLimit(options.memoryLimit)) / (4 * dim * (complexModel ? 2 : 1))),
+  );
+  const mode: BasisMode =
+    options.basis ?? (dim <= KEEP_BASIS_DIMENSION ? 'full' : compactSteps >= MIN_COMPACT_STEPS ? 'compact' : 'rerun');
+  const stepsPerCycle = mode === 'compact' ? Math.max(2, compactSteps) : maxSteps;
+  const stored = mode === 'full' ? Math.min(dim, maxSteps) : mode === 'compact' ? Math.ceil(stepsPerCycle / 2) : 0;
+  ensureSectorFits(dim, stored + 8, complexModel, 'the ground-state sector', options.memoryLimit);
   const sector = fockSector(spec);
   const hamiltonian = sectorHamiltonian(model, sector);
   const complex = !hamiltonian.real;
@@ -85,7 +107,7 @@ export function groundLevel(model: FermionModel, options: GroundLevelOptions = {
     if (found === dim || size < 1e-8) break;
     scale(1 / size, start);
     const target = found === 0 ? null : energy + degTol * Math.max(1, Math.abs(energy));
-    const lowest = lowestEigenpair(apply, start, states, { tol, maxSteps, keepBasis, complex, aboveOf: target, dim });
+    const lowest = lowestEigenpair(apply, start, states, { tol, maxSteps: stepsPerCycle, mode, complex, aboveOf: target, dim });
     if (target !== null && lowest.value > target) {
       gap = lowest.value - energy;
       break;
@@ -104,7 +126,7 @@ function isRealModel(model: FermionModel): boolean {
 interface LowestOptions {
   readonly tol: number;
   readonly maxSteps: number;
-  readonly keepBasis: boolean;
+  readonly mode: BasisMode;
   readonly complex: boolean;
   /** When set, stop as soon as the lowest level is certainly above this (only its value is needed). */
   readonly aboveOf: number | null;
@@ -122,12 +144,15 @@ function lowestEigenpair(
   for (let cycle = 0; cycle < MAX_CYCLES; cycle++) {
     let theta = 0;
     let certainlyAbove = false;
+    // Only the first compact cycle starts far from the eigenvector; later ones refine to o.tol.
+    const stopAt = o.mode === 'compact' && cycle === 0 ? Math.max(0.5 * o.tol, COMPACT_FLOOR) : 0.5 * o.tol;
     const spec: LanczosSpec = {
       apply,
       start,
       maxSteps: Math.min(o.maxSteps, o.dim),
       deflate,
-      keepBasis: o.keepBasis,
+      keepBasis: o.mode === 'full',
+      compactBasis: o.mode === 'compact',
       complex: o.complex,
       stop: (alpha, beta) => {
         const m = alpha.length;
@@ -136,7 +161,7 @@ function lowestEigenpair(
         theta = eig.values[0]!;
         const estimate = Math.abs(beta[m - 1]! * eig.rows[0]![0]!);
         const scaleE = Math.max(1, Math.abs(theta));
-        if (estimate <= 0.5 * o.tol * scaleE) return true;
+        if (estimate <= stopAt * scaleE) return true;
         if (o.aboveOf !== null && m > 1) {
           // Eigenvalue error ≤ r²/δ with δ the distance to the rest of the spectrum (Kato–Temple).
           const delta = eig.values[1]! - theta;
@@ -155,14 +180,20 @@ function lowestEigenpair(
     theta = eig.values[0]!;
     if (certainlyAbove) return { value: theta, vector: null, residual: Number.NaN };
     const y = eig.rows.map((row) => row[0]!);
-    const vector = run.basis !== null ? combine(run.basis, y, o.complex) : combineByRerun(spec, m, y);
+    const vector =
+      run.basis !== null
+        ? combine(run.basis, y, o.complex)
+        : run.compact !== null
+          ? combineCompact(start, run.compact, y, o.complex)
+          : combineByRerun(spec, m, y);
     orthogonalize(vector, deflate);
     scale(1 / norm(vector), vector);
     const hv = zeroVec(vector.re.length, o.complex);
     apply(vector, hv);
     axpy(-theta, 0, vector, hv);
     const residual = norm(hv);
-    if (residual <= o.tol * Math.max(1, Math.abs(theta)) || run.exhausted) {
+    // A compact vector is single-precision accurate even when the Krylov space closed: refine it.
+    if (residual <= o.tol * Math.max(1, Math.abs(theta)) || (run.exhausted && o.mode !== 'compact')) {
       return { value: theta, vector, residual };
     }
     start = vector;

@@ -22,12 +22,21 @@ interface HopTable {
   readonly im: Float64Array;
 }
 
-/** Sectors from this dimension on apply a real H on all cores by default (worker start-up costs ~0.1 s). */
+/** Sectors from this dimension on use POLEWRIGHT_EXACT_THREADS threads (worker start-up costs ~0.1 s). */
 export const PARALLEL_DIMENSION = 50_000;
 
 export interface SectorHamiltonianOptions {
-  /** Threads for products of a real H (the caller plus threads − 1 workers). Default: all cores from PARALLEL_DIMENSION on, else 1. */
+  /**
+   * Threads for products of a real H (the caller plus threads − 1 workers). Default: the
+   * POLEWRIGHT_EXACT_THREADS environment variable from PARALLEL_DIMENSION on, else 1 (on a shared,
+   * loaded 2-core machine a second thread measured no gain at dimension 853,776 and a loss at 63,504).
+   */
   readonly threads?: number;
+}
+
+function threadsFromEnvironment(): number {
+  const value = Number(process.env.POLEWRIGHT_EXACT_THREADS ?? '1');
+  return Number.isInteger(value) && value >= 1 ? Math.min(value, availableParallelism()) : 1;
 }
 
 /** Largest dimension × generic-term count for which the generic terms are stored as a sparse matrix. */
@@ -148,8 +157,8 @@ export function sectorHamiltonian(model: FermionModel, sector: FockSector, optio
       lRe: lt.re,
     };
   });
-  const threads = Math.max(1, Math.floor(options.threads ?? (sector.dimension >= PARALLEL_DIMENSION ? availableParallelism() : 1)));
-  let pool = threads > 1 && terms.real ? rowThreads(kernelBlocks, diagonal, threads) : null;
+  const threads = options.threads ?? (sector.dimension >= PARALLEL_DIMENSION ? threadsFromEnvironment() : 1);
+  let pool = threads >= 2 && terms.real ? rowThreads(kernelBlocks, diagonal, threads) : null;
 
   function applyReal(x: Float64Array, y: Float64Array): void {
     if (pool !== null && isShared(x) && isShared(y)) pool.apply(x, y);

@@ -139,3 +139,20 @@ describe('greensFunction(model, ground, options)', () => {
     );
   });
 });
+
+describe('greensFunction tolerance', () => {
+  it('stays within 10× the default relative tolerance of the exhausted-Krylov result (Hubbard ring, η = 0.1)', () => {
+    const model = hubbard({ sites: 6, hopping: 1, interaction: 4, chemicalPotential: 2, ring: true, spin: 0 });
+    const ground = groundLevel(model);
+    const z = Array.from({ length: 200 }, (_, k) => ({ re: -8 + (16 * k) / 199, im: 0.1 }));
+    const exact = greensFunction(model, ground, { ...STRICT, z, pairs: [[0, 0]] }).entries[0]!;
+    const loose = greensFunction(model, ground, { z, pairs: [[0, 0]] });
+    let peak = 0;
+    let error = 0;
+    for (let k = 0; k < z.length; k++) {
+      peak = Math.max(peak, Math.hypot(exact.re[k]!, exact.im[k]!));
+      error = Math.max(error, Math.hypot(loose.entries[0]!.re[k]! - exact.re[k]!, loose.entries[0]!.im[k]! - exact.im[k]!));
+    }
+    expectClose(Math.min(error / peak, 1e-5), error / peak, 0, 'relative error ≤ 1e-5');
+  });
+});

@@ -54,3 +54,24 @@ describe('groundLevel(model)', () => {
     expect(String((caught as Error).message)).toMatch(/ground-state sector .*dimension 4900/);
   });
 });
+
+describe('groundLevel(model, { basis })', () => {
+  it("gives the same level with 'compact' (single-precision basis, refined) and 'rerun' as with 'full'", () => {
+    const models = [
+      hubbard({ sites: 6, hopping: 1, interaction: 4, chemicalPotential: 2, ring: true, spin: 0 }),
+      hubbard({ sites: 1, hopping: 0, interaction: 4, chemicalPotential: 2 }),
+      { ...quadraticModel(hubbard({ sites: 6, hopping: 0.7, interaction: 0, chemicalPotential: 0.3, ring: true }).oneBody, 1) },
+    ];
+    for (const model of models) {
+      const full = groundLevel(model, { basis: 'full' });
+      for (const basis of ['compact', 'rerun'] as const) {
+        const g = groundLevel(model, { basis });
+        expectClose(g.energy, full.energy, 1e-10 * Math.max(1, Math.abs(full.energy)), `E0 ${basis} ${model.name}`);
+        expect(g.degeneracy).toBe(full.degeneracy);
+        if (full.gap === null) expect(g.gap).toBeNull();
+        else expectClose(g.gap!, full.gap, 1e-8, `gap ${basis} ${model.name}`);
+        expect(g.residual).toBeLessThanOrEqual(1e-10 * Math.max(1, Math.abs(g.energy)));
+      }
+    }
+  });
+});

@@ -1,7 +1,7 @@
 /**
  * lanczos: the three-term Lanczos recurrence for a Hermitian operator (Lanczos 1950), optionally
- * keeping the basis with full reorthogonalisation (twice, "twice is enough"), and keeping every
- * vector orthogonal to a set of already-found eigenvectors (deflation).
+ * keeping the basis with full reorthogonalisation (twice, "twice is enough") or a single-precision
+ * copy of it, and keeping every vector orthogonal to already-found eigenvectors (deflation).
  */
 import { axpy, dot, norm, orthogonalize, scale, zeroVec, type CVec } from './vec.js';
 
@@ -13,6 +13,8 @@ export interface LanczosSpec {
   readonly deflate: readonly CVec[];
   /** Store the basis and reorthogonalise against all of it (small sectors). */
   readonly keepBasis: boolean;
+  /** Without keepBasis: store v_1, v_2, … in single precision (no reorthogonalisation) for combineCompact. */
+  readonly compactBasis?: boolean;
   /** Complex vectors are needed (complex H or complex start). */
   readonly complex: boolean;
   /** Called after each step with α_0…α_m and β_1…β_{m+1}; return true to stop. */
@@ -30,6 +32,14 @@ export interface LanczosRun {
   /** The Krylov space closed (β ≈ 0): the recurrence is exact. */
   readonly exhausted: boolean;
   readonly basis: CVec[] | null;
+  /** v_1, v_2, … rounded to single precision when compactBasis was asked for. */
+  readonly compact: CompactVec[] | null;
+}
+
+/** A vector rounded to single precision (half the memory of a CVec). */
+export interface CompactVec {
+  readonly re: Float32Array;
+  readonly im: Float32Array | null;
 }
 
 /** Relative size of β below which the Krylov space counts as exhausted. */
@@ -40,6 +50,7 @@ export function lanczos(spec: LanczosSpec): LanczosRun {
   const alpha: number[] = [];
   const beta: number[] = [];
   const basis: CVec[] | null = spec.keepBasis ? [spec.start] : null;
+  const compact: CompactVec[] | null = !spec.keepBasis && spec.compactBasis === true ? [] : null;
   let v: CVec = spec.start;
   let vPrev: CVec | null = null;
   let spare: CVec | null = null;
@@ -74,18 +85,41 @@ export function lanczos(spec: LanczosSpec): LanczosRun {
       spare = null;
     } else {
       spare = vPrev === null || vPrev === spec.start ? null : vPrev;
+      compact?.push({ re: Float32Array.from(w.re), im: w.im === null ? null : Float32Array.from(w.im) });
     }
     vPrev = v;
     v = w;
     betaPrev = b;
   }
-  return { alpha, beta, exhausted, basis };
+  return { alpha, beta, exhausted, basis, compact };
 }
 
 /** Σ_k y_k v_k from a stored basis. */
 export function combine(basis: readonly CVec[], y: ArrayLike<number>, complex: boolean): CVec {
   const out = zeroVec(basis[0]!.re.length, complex);
   for (let k = 0; k < y.length; k++) axpy(y[k]!, 0, basis[k]!, out);
+  return out;
+}
+
+/**
+ * y_0 v_0 + Σ_{k≥1} y_k ṽ_k with v_0 the (double-precision) start and ṽ_k the single-precision basis:
+ * the rounding error is ~6e-8·‖Σ_{k≥1} y_k v_k‖, negligible once the start is nearly an eigenvector.
+ */
+export function combineCompact(start: CVec, compact: readonly CompactVec[], y: ArrayLike<number>, complex: boolean): CVec {
+  const out = zeroVec(start.re.length, complex);
+  axpy(y[0]!, 0, start, out);
+  for (let k = 1; k < y.length; k++) {
+    const c = y[k]!;
+    const v = compact[k - 1]!;
+    const vr = v.re;
+    const or = out.re;
+    for (let t = 0; t < vr.length; t++) or[t]! += c * vr[t]!;
+    if (v.im !== null) {
+      const vi = v.im;
+      const oi = out.im!;
+      for (let t = 0; t < vi.length; t++) oi[t]! += c * vi[t]!;
+    }
+  }
   return out;
 }
 
