@@ -27,6 +27,11 @@ export interface BlockEncoding {
   /** The exact encoded operator M (2^n × 2^n, little-endian), for small n; memoised. */
   readonly exact: () => ComplexMatrix;
   readonly costNotes: readonly CostNote[];
+  /**
+   * Rigorous bound on ‖(<0|_anc ⊗ I) U (|0>_anc ⊗ I) − M/α‖ when the circuit is an approximation
+   * (e.g. energies rounded to a register grid); absent when it is exact up to rounding.
+   */
+  readonly errorBound?: number;
 }
 
 /** Total ancilla qubits of an encoding. */

@@ -15,6 +15,11 @@ import { exactInverse } from './internal/exactInverse.js';
 import { registerEnergies } from './internal/flagAmplitude.js';
 import { flagRotationOps } from './internal/flagRotationOps.js';
 
+/** Widest register the default flag rotation multiplexes over all 2^m values (beyond it the pruned form is cheaper). */
+const MAX_MULTIPLEXED_BITS = 10;
+/** Widest register a multiplexed flag rotation may have at all (its angles take O(4^m) work to compute). */
+const MAX_EXPLICIT_MULTIPLEXED_BITS = 14;
+
 export interface FastInverseOptions {
   /** Adder of the reversible arithmetic: Draper's QFT adder (default) or Cuccaro's ripple-carry adder. */
   readonly adder?: 'qft' | 'ripple';
@@ -27,7 +32,7 @@ export interface FastInverseOptions {
   /**
    * `multiplexed`: one Gray-code multiplexed ry and rz over all 2^m register values (2^{m+1} rotations, exact);
    * `pruned`: one multi-controlled ry/rz per dyadic interval of values (≈ O(1/precision + m) of them, within precision/2).
-   * Default: `multiplexed` when the energies are commensurate with the grid (exact encoding), else `pruned`.
+   * Default: `multiplexed` when the energies are commensurate with the grid (exact encoding) and m ≤ 10, else `pruned`.
    */
   readonly flagRotation?: 'pruned' | 'multiplexed';
   /** Passed to oneBodyRotation (Givens network or fermionic Fourier transform). */
@@ -84,7 +89,7 @@ function windowOf(electrons: FastInverseOptions['electrons'], n: number): Window
  * pruned to dyadic intervals); then everything uncomputed. Compute/action form: a controlled call controls only the flag.
  * Error: with δ = the sum of the N_max largest |ε_k − ε̃_k| ≥ |E − Ẽ|, |c/(w−E) − c/(w−Ẽ)| = cδ/(|w−E||w−Ẽ|)
  * ≤ δ / max(|Im w|, c − δ), since |w − Ẽ| ≥ c; the pruned flag adds at most each interval's bound (flagIntervals).
- * @throws RangeError for Im w = 0, a bad window or options, or a non-Hermitian T.
+ * @throws RangeError for Im w = 0, a bad window or options, a multiplexed flag rotation over more than 14 bits, or a non-Hermitian T.
  */
 export function fastInverse(T: ComplexMatrix, w: ComplexScalar, options: FastInverseOptions = {}): FastInverseEncoding {
   const adder = options.adder ?? 'qft';
@@ -124,7 +129,10 @@ export function fastInverse(T: ComplexMatrix, w: ComplexScalar, options: FastInv
   }
   const minEnergy = grid.modeOffset * sector.min + grid.step * grid.sumMin;
   const energies = registerEnergies(minEnergy, grid.step, grid.sumMax - grid.sumMin, w);
-  const mode = options.flagRotation ?? (grid.commensurate ? 'multiplexed' : 'pruned');
+  const mode = options.flagRotation ?? (grid.commensurate && m <= MAX_MULTIPLEXED_BITS ? 'multiplexed' : 'pruned');
+  if (mode === 'multiplexed' && m > MAX_EXPLICIT_MULTIPLEXED_BITS) {
+    throw new RangeError(`fastInverse: a multiplexed flag rotation over ${m} bits is too large (at most ${MAX_EXPLICIT_MULTIPLEXED_BITS}); use "pruned"`);
+  }
   const flagOps = flagRotationOps(mode, energies, register, flag, windowQubit, precision / 2);
   const delta = grid.roundingDelta;
   const rounding = delta === 0 ? 0 : delta / Math.max(eta, energies.c - delta);
@@ -146,6 +154,7 @@ export function fastInverse(T: ComplexMatrix, w: ComplexScalar, options: FastInv
     alpha: 1 / energies.c,
     exact: memoiseMatrix(() => exactInverse(T, w, sector)),
     costNotes: [],
+    errorBound: quantisationBound,
     w,
     c: energies.c,
     registerBits: m,

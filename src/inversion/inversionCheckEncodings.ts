@@ -12,7 +12,7 @@ export interface InversionCheckOptions {
   readonly E0: number;
   /** Default: the frequency grid's midpoint + iη. */
   readonly z?: ComplexScalar;
-  /** Passed to fastInverse (the electron window is set per row unless given here). */
+  /** Passed to fastInverse (the electron window is set per row unless given here). Default precision 1e-2, maxBits 8, small enough to simulate. */
   readonly fastInverse?: FastInverseOptions;
 }
 
@@ -30,7 +30,9 @@ function oneBodyA(model: FermionModel): ComplexMatrix {
  * Rows labelled exactly "fast inverse (particle)", "fast inverse (hole)", "direct shift (particle)", "direct shift (hole)",
  * in that order, at w⁺ = z + E0 and w⁻ = E0 − z (greensShifts). The fast inverses act on the sector the Green's function
  * needs — N + 1 electrons for the particle part, N − 1 for the hole part (clamped to 0…modes) — so their exact operator is
- * P_{N±1} (w − A)⁻¹ P_{N±1}; the direct shifts act on the whole Fock space.
+ * P_{N±1} (w − A)⁻¹ P_{N±1}; the direct shifts act on the whole Fock space. A fast inverse is correct when its verified error
+ * is within its `quantisationBound` (zero up to rounding when the ε_k are dyadic), so a check should pass it at
+ * max(tolerance, quantisationBound).
  */
 export function inversionCheckEncodings(model: FermionModel, options: InversionCheckOptions): { label: string; encoding: BlockEncoding }[] {
   const z = options.z ?? { re: (model.grid.from + model.grid.to) / 2, im: model.broadening };
@@ -38,7 +40,7 @@ export function inversionCheckEncodings(model: FermionModel, options: InversionC
   const A = oneBodyA(model);
   const sector = (N: number): number => Math.min(model.modes, Math.max(0, N));
   const fast = (w: ComplexScalar, N: number, label: string): BlockEncoding =>
-    fastInverse(A, w, { electrons: sector(N), ...options.fastInverse, label });
+    fastInverse(A, w, { electrons: sector(N), precision: 1e-2, maxBits: 8, ...options.fastInverse, label });
   return [
     { label: 'fast inverse (particle)', encoding: fast(particle, model.electrons + 1, 'fast inverse (particle)') },
     { label: 'fast inverse (hole)', encoding: fast(hole, model.electrons - 1, 'fast inverse (hole)') },

@@ -57,6 +57,7 @@ function slaterRow(model: FermionModel, TA: ComplexMatrix, V: ComplexMatrix, occ
     ancillaQubits: 0,
     alpha: 1,
     maxError,
+    errorBound: 0,
     unitarityDeviation: Math.abs(state.norm() - 1),
     method: 'state',
     gates: countsToObject(blockCounts(block)),

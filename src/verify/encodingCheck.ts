@@ -13,6 +13,8 @@ export interface CheckRow {
   readonly alpha: number;
   /** Largest entry error found (see VerifyReport.maxError). */
   readonly maxError: number;
+  /** The encoding's own error bound (0 when exact); a row passes when maxError ≤ max(tolerance, errorBound). */
+  readonly errorBound: number;
   readonly unitarityDeviation: number;
   readonly method: 'exhaustive' | 'probe' | 'state';
   readonly gates: Record<string, number>;
@@ -21,15 +23,17 @@ export interface CheckRow {
 
 export function encodingCheck(encoding: BlockEncoding, tolerance: number, options: VerifyOptions = {}): CheckRow {
   const report = verifyEncoding(encoding, options);
+  const errorBound = encoding.errorBound ?? 0;
   return {
     label: encoding.label,
     systemQubits: encoding.systemQubits,
     ancillaQubits: ancillaQubits(encoding),
     alpha: encoding.alpha,
     maxError: report.maxError,
+    errorBound,
     unitarityDeviation: report.unitarityDeviation,
     method: report.method,
     gates: countsToObject(blockCounts(encoding.block)),
-    passed: report.maxError <= tolerance && report.unitarityDeviation <= tolerance,
+    passed: report.maxError <= Math.max(tolerance, errorBound) && report.unitarityDeviation <= tolerance,
   };
 }

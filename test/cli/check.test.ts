@@ -10,21 +10,28 @@ describe('polewright check MODEL', () => {
   it('prints one row per block with the fixed labels and passes', () => {
     const result = runCli(['check', MODEL]);
     expect(result.status).toBe(0);
-    for (const label of ['annihilation 0', 'creation 2', 'H', 'A (one-body)', 'B (two-body)', 'orbital rotation', 'orbital rotation inverse', 'Slater determinant']) {
+    for (const label of [
+      'annihilation 0', 'creation 2', 'H', 'A (one-body)', 'B (two-body)', 'orbital rotation', 'orbital rotation inverse',
+      'Slater determinant', 'fast inverse (particle)', 'fast inverse (hole)', 'direct shift (particle)', 'direct shift (hole)',
+    ]) {
       expect(result.stdout).toMatch(new RegExp(`^${label.replace(/[()]/g, '\\$&')}\\s`, 'm'));
     }
     expect(result.stdout).not.toContain('FAIL');
   });
 
-  it('--json prints { ok, blocks[label, systemQubits, ancillaQubits, alpha, maxError, gates] }', () => {
+  it('--json prints { ok, blocks[label, systemQubits, ancillaQubits, alpha, maxError, errorBound, gates] }', () => {
     const result = runCli(['check', MODEL, '--json']);
     expect(result.status).toBe(0);
     const report = JSON.parse(result.stdout);
     expect(report.ok).toBe(true);
-    expect(report.blocks).toHaveLength(3 * 2 + 6);
+    expect(report.blocks).toHaveLength(3 * 2 + 6 + 4);
     for (const block of report.blocks) {
-      expect(Object.keys(block)).toEqual(['label', 'systemQubits', 'ancillaQubits', 'alpha', 'maxError', 'gates']);
-      expect(block.maxError).toBeLessThanOrEqual(1e-10);
+      expect(Object.keys(block)).toEqual(['label', 'systemQubits', 'ancillaQubits', 'alpha', 'maxError', 'errorBound', 'gates']);
+      expect(block.maxError).toBeLessThanOrEqual(Math.max(1e-10, block.errorBound));
+    }
+    // The fast inverse's α = 1/c never exceeds 1/η (default z = grid midpoint + iη, η = 0.1 in this model).
+    for (const label of ['fast inverse (particle)', 'fast inverse (hole)']) {
+      expect(report.blocks.find((b: { label: string }) => b.label === label).alpha).toBeLessThanOrEqual(1 / 0.1 + 1e-12);
     }
     expect(report.blocks.find((b: { label: string }) => b.label === 'creation 1')).toMatchObject({ systemQubits: 3, ancillaQubits: 1, alpha: 1 });
   });
@@ -46,5 +53,8 @@ describe('polewright check MODEL', () => {
     const tolerance = runCli(['check', MODEL, '--tolerance', 'abc']);
     expect(tolerance.status).toBe(2);
     expect(tolerance.stderr).toMatch(/--tolerance/);
+    const z = runCli(['check', MODEL, '--z', '0.5,-0.1']);
+    expect(z.status).toBe(2);
+    expect(z.stderr).toMatch(/--z/);
   });
 });

@@ -74,12 +74,12 @@ export function referenceResolvent(T: ComplexMatrix, w: { re: number; im: number
   return inverse;
 }
 
-/** Q diag(spectrum) Q† for a random unitary Q (Gram–Schmidt of random complex columns). */
+/** Q diag(spectrum) Q† for a random unitary Q: Gram–Schmidt of the columns 3·e_k + (entries in [−0.5, 0.5]), well conditioned. */
 export function withSpectrum(spectrum: readonly number[], entries: readonly number[]): ComplexMatrix {
   const n = spectrum.length;
   const cols: { re: number[]; im: number[] }[] = [];
   for (let k = 0; k < n; k++) {
-    const v = { re: Array.from({ length: n }, (_, i) => entries[(2 * (k * n + i)) % entries.length]! + (i === k ? 2 : 0)), im: Array.from({ length: n }, (_, i) => entries[(2 * (k * n + i) + 1) % entries.length]!) };
+    const v = { re: Array.from({ length: n }, (_, i) => entries[(2 * (k * n + i)) % entries.length]! / 2 + (i === k ? 3 : 0)), im: Array.from({ length: n }, (_, i) => entries[(2 * (k * n + i) + 1) % entries.length]! / 2) };
     for (const u of cols) {
       let dr = 0;
       let di = 0;
@@ -109,9 +109,9 @@ export function withSpectrum(spectrum: readonly number[], entries: readonly numb
   return T;
 }
 
-/** A random Hermitian n×n matrix with entries in [−scale, scale]. */
+/** A random Hermitian n×n matrix with entries in [−scale, scale], those below 1e-6 in size set to 0 (no subnormals). */
 export const hermitianArb = (n: number, scale = 1): fc.Arbitrary<ComplexMatrix> =>
-  fc.array(fc.double({ min: -scale, max: scale, noNaN: true }), { minLength: 2 * n * n, maxLength: 2 * n * n }).map((x) => {
+  fc.array(fc.double({ min: -scale, max: scale, noNaN: true }).map((x) => (Math.abs(x) < 1e-6 ? 0 : x)), { minLength: 2 * n * n, maxLength: 2 * n * n }).map((x) => {
     const T = { n, re: new Float64Array(n * n), im: new Float64Array(n * n) };
     for (let i = 0; i < n; i++) {
       T.re[i * n + i] = x[i * n + i]!;
