@@ -4,8 +4,10 @@ import { param } from '../circuit/angle.js';
 import { defineConjugatedBlock } from '../circuit/defineBlock.js';
 import { call, gate } from '../circuit/ops.js';
 import type { Block, GateOp } from '../circuit/types.js';
-import { CONSTANT_ADDITION_KERNEL } from '../sim/kernels/constantAdditionKernel.js';
 import { quantumFourierTransform } from './quantumFourierTransform.js';
+
+/** Simulator kernel id of the constant-addition block (src/sim/kernels/constantAdditionKernel.ts). */
+export const CONSTANT_ADDITION_KERNEL = 'constant-addition';
 
 /**
  * The block `fourier_adder_<width>_<controls>(offset, w0, …)` on qubits [register (width, little-endian), c_0 … c_{K−1}]:

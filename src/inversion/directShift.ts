@@ -3,7 +3,7 @@
 import type { BlockEncoding } from '../blocks/BlockEncoding.js';
 import { modelEncodings } from '../blocks/build/modelEncodings.js';
 import { shiftedEncoding } from '../blocks/combine/shiftedEncoding.js';
-import type { ComplexScalar } from '../blocks/internal/denseAlgebra.js';
+import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
 
 /**

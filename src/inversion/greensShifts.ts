@@ -1,5 +1,5 @@
 // greensShifts: the two spectral shifts w of the zero-temperature Green's function, particle w = z + E0 and hole w = E0 − z.
-import type { ComplexScalar } from '../blocks/internal/denseAlgebra.js';
+import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 
 export interface GreensShifts {
   /** w⁺ = z + E0: G⁺_ij(z) = <ψ0| a_i (w⁺ − H)⁻¹ a_j† |ψ0>. */

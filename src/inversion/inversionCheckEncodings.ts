@@ -1,7 +1,7 @@
 // inversionCheckEncodings: the four block-encodings `polewright check` verifies for a model — the fast inverse (w − A)⁻¹ and
 // the direct shift w − H, each at the particle and the hole shift of the Green's function.
 import type { BlockEncoding } from '../blocks/BlockEncoding.js';
-import type { ComplexScalar } from '../blocks/internal/denseAlgebra.js';
+import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { ComplexMatrix, FermionModel } from '../model/FermionModel.js';
 import { directShift } from './directShift.js';
 import { fastInverse, type FastInverseOptions } from './fastInverse.js';

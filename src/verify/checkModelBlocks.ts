@@ -13,7 +13,7 @@ import { slaterDeterminant } from '../rotations/slaterDeterminant.js';
 import { blockCounts, countsToObject } from '../circuit/gateCounts.js';
 import { StateVector } from '../sim/StateVector.js';
 import { applyUnitaryOps } from '../sim/applyUnitaryOps.js';
-import { adjointMatrix } from '../blocks/internal/denseAlgebra.js';
+import { adjointMatrix } from '../linalg/adjointMatrix.js';
 import type { BlockEncoding } from '../blocks/BlockEncoding.js';
 import { encodingCheck, type CheckRow } from './encodingCheck.js';
 import { gaussianUnitaryMatrix, minor } from './internal/gaussianUnitaryMatrix.js';

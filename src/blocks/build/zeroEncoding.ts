@@ -4,7 +4,7 @@
 import { defineBlock } from '../../circuit/defineBlock.js';
 import { gate } from '../../circuit/ops.js';
 import { memoiseMatrix, type BlockEncoding } from '../BlockEncoding.js';
-import { zeroMatrix } from '../internal/denseAlgebra.js';
+import { zeroMatrix } from '../../linalg/zeroMatrix.js';
 
 export function zeroEncoding(systemQubits: number, label = '0'): BlockEncoding {
   return {

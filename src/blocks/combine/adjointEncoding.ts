@@ -4,7 +4,7 @@
 import { defineBlock } from '../../circuit/defineBlock.js';
 import { call } from '../../circuit/ops.js';
 import { memoiseMatrix, type BlockEncoding } from '../BlockEncoding.js';
-import { adjointMatrix } from '../internal/denseAlgebra.js';
+import { adjointMatrix } from '../../linalg/adjointMatrix.js';
 
 export function adjointEncoding(encoding: BlockEncoding, label = `(${encoding.label})†`): BlockEncoding {
   const width = encoding.block.qubits;

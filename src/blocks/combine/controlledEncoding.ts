@@ -5,7 +5,10 @@
 import { defineBlock } from '../../circuit/defineBlock.js';
 import { call } from '../../circuit/ops.js';
 import { ancillaQubits, memoiseMatrix, type BlockEncoding } from '../BlockEncoding.js';
-import { identityMatrix, kronMatrices, weightedSum, zeroMatrix } from '../internal/denseAlgebra.js';
+import { identityMatrix } from '../../linalg/identityMatrix.js';
+import { kronMatrices } from '../../linalg/kronMatrices.js';
+import { weightedSum } from '../../linalg/weightedSum.js';
+import { zeroMatrix } from '../../linalg/zeroMatrix.js';
 
 function projector(bit: 0 | 1) {
   const p = zeroMatrix(2);

@@ -3,7 +3,7 @@
  */
 import { defineBlock } from '../../circuit/defineBlock.js';
 import { memoiseMatrix, type BlockEncoding } from '../BlockEncoding.js';
-import { identityMatrix } from '../internal/denseAlgebra.js';
+import { identityMatrix } from '../../linalg/identityMatrix.js';
 
 export function identityEncoding(systemQubits: number): BlockEncoding {
   return {

@@ -7,7 +7,8 @@ import { defineConjugatedBlock } from '../../circuit/defineBlock.js';
 import { call, gate } from '../../circuit/ops.js';
 import type { UnitaryOp } from '../../circuit/types.js';
 import { ancillaQubits, memoiseMatrix, type AncillaRegister, type BlockEncoding } from '../BlockEncoding.js';
-import { weightedSum, type ComplexScalar } from '../internal/denseAlgebra.js';
+import { weightedSum } from '../../linalg/weightedSum.js';
+import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 import { prepareAmplitudes } from '../prepareAmplitudes.js';
 import { indexControls } from '../internal/indexControls.js';
 

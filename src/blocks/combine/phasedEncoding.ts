@@ -5,7 +5,7 @@
 import { defineBlock } from '../../circuit/defineBlock.js';
 import { call, gate } from '../../circuit/ops.js';
 import { memoiseMatrix, type BlockEncoding } from '../BlockEncoding.js';
-import { weightedSum } from '../internal/denseAlgebra.js';
+import { weightedSum } from '../../linalg/weightedSum.js';
 
 export function phasedEncoding(encoding: BlockEncoding, phase: number, label = `e^{i${phase}} ${encoding.label}`): BlockEncoding {
   const width = encoding.block.qubits;

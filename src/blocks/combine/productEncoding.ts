@@ -6,7 +6,7 @@ import { defineBlock } from '../../circuit/defineBlock.js';
 import { call } from '../../circuit/ops.js';
 import type { UnitaryOp } from '../../circuit/types.js';
 import { ancillaQubits, memoiseMatrix, type AncillaRegister, type BlockEncoding } from '../BlockEncoding.js';
-import { multiplyMatrices } from '../internal/denseAlgebra.js';
+import { matrixMultiply } from '../../linalg/matrixMultiply.js';
 
 export function productEncoding(factors: readonly BlockEncoding[], label?: string): BlockEncoding {
   if (factors.length === 0) throw new RangeError('productEncoding: no factors');
@@ -34,7 +34,7 @@ export function productEncoding(factors: readonly BlockEncoding[], label?: strin
     systemQubits: n,
     ancillas,
     alpha: factors.reduce((a, f) => a * f.alpha, 1),
-    exact: memoiseMatrix(() => factors.map((f) => f.exact()).reduce((a, b) => multiplyMatrices(a, b))),
+    exact: memoiseMatrix(() => factors.map((f) => f.exact()).reduce((a, b) => matrixMultiply(a, b))),
     costNotes: factors.flatMap((f) => f.costNotes),
   };
 }

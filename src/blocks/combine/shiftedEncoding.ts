@@ -3,7 +3,7 @@
  * α = |w| + α_M.
  */
 import type { BlockEncoding } from '../BlockEncoding.js';
-import type { ComplexScalar } from '../internal/denseAlgebra.js';
+import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 import { identityEncoding } from './identityEncoding.js';
 import { linearCombination } from './linearCombination.js';
 

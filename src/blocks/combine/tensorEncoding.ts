@@ -5,7 +5,7 @@
 import { defineBlock } from '../../circuit/defineBlock.js';
 import { call } from '../../circuit/ops.js';
 import { ancillaQubits, memoiseMatrix, type BlockEncoding } from '../BlockEncoding.js';
-import { kronMatrices } from '../internal/denseAlgebra.js';
+import { kronMatrices } from '../../linalg/kronMatrices.js';
 
 const span = (start: number, size: number): number[] => Array.from({ length: size }, (_, k) => start + k);
 

@@ -1,6 +1,7 @@
 // exactInverse: the dense P (w − A)⁻¹ P on the Fock space for A = Σ T_ij a_i† a_j and P the projector onto the
 // electron-number window — from A's matrix (fermionOperatorMatrix), inverted sector by sector through its eigenpairs.
-import { zeroMatrix, type ComplexScalar } from '../../blocks/internal/denseAlgebra.js';
+import { zeroMatrix } from '../../linalg/zeroMatrix.js';
+import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 import { hermitianEigen } from '../../linalg/hermitianEigen.js';
 import type { ComplexMatrix } from '../../model/FermionModel.js';
 import { fermionOperatorMatrix } from '../../operators/fermionOperatorMatrix.js';

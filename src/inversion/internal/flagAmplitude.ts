@@ -1,6 +1,6 @@
 // flagAmplitude: the energies the register can hold, E(v) = E_min + v·Δ for v = 0 … R, the normaliser c = min_v |w − E(v)|,
 // and the ry/rz angles that put f(v) = c/(w − E(v)) (|f| ≤ 1) on the flag's |0>.
-import type { ComplexScalar } from '../../blocks/internal/denseAlgebra.js';
+import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 
 export interface RegisterEnergies {
   /** E(0). */

@@ -3,7 +3,7 @@
 // window qubit (flag sent to |1> outside the electron-number window).
 import { gate } from '../../circuit/ops.js';
 import type { UnitaryOp } from '../../circuit/types.js';
-import { multiplexedRotation } from '../multiplexedRotation.js';
+import { multiplexedRotation } from '../../blocks/multiplexedRotation.js';
 import { flagAngles, type RegisterEnergies } from './flagAmplitude.js';
 import { flagIntervals } from './flagIntervals.js';
 

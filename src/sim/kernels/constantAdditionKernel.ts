@@ -6,7 +6,6 @@ import type { NativeKernel } from '../registerNativeKernel.js';
 import { deposit, indexPattern, maskOf } from '../internal/indexPattern.js';
 
 /** Registry id of the kernel. */
-export const CONSTANT_ADDITION_KERNEL = 'constant-addition';
 
 export const constantAdditionKernel: NativeKernel = (state, qubits, args, controls, negControls, inverse, power) => {
   const weights = args.length - 1;

@@ -7,8 +7,6 @@ import type { NativeKernel } from '../registerNativeKernel.js';
 import { deposit, indexPattern, maskOf } from '../internal/indexPattern.js';
 
 /** Registry ids of the kernel for y- and z-rotations. */
-export const MULTIPLEXED_RY_KERNEL = 'multiplexed-ry';
-export const MULTIPLEXED_RZ_KERNEL = 'multiplexed-rz';
 
 function selectorAngles(thetas: readonly number[], scale: number): Float64Array {
   const size = thetas.length;

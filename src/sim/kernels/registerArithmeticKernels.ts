@@ -3,8 +3,10 @@
  * that nativeKernelRegistry.ts adds to the built-in table.
  */
 import type { NativeKernel } from '../registerNativeKernel.js';
-import { constantAdditionKernel, CONSTANT_ADDITION_KERNEL } from './constantAdditionKernel.js';
-import { MULTIPLEXED_RY_KERNEL, MULTIPLEXED_RZ_KERNEL, multiplexedRyKernel, multiplexedRzKernel } from './multiplexedRotationKernel.js';
+import { CONSTANT_ADDITION_KERNEL } from '../../arithmetic/fourierConstantAdder.js';
+import { MULTIPLEXED_RY_KERNEL, MULTIPLEXED_RZ_KERNEL } from '../../blocks/multiplexedRotation.js';
+import { constantAdditionKernel } from './constantAdditionKernel.js';
+import { multiplexedRyKernel, multiplexedRzKernel } from './multiplexedRotationKernel.js';
 
 export const ARITHMETIC_KERNELS: readonly (readonly [string, NativeKernel])[] = [
   [CONSTANT_ADDITION_KERNEL, constantAdditionKernel],

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { uniformlyControlledRotation } from '../../src/blocks/uniformlyControlledRotation.js';
-import { multiplexedRotation } from '../../src/inversion/multiplexedRotation.js';
+import { multiplexedRotation } from '../../src/blocks/multiplexedRotation.js';
 import { circuitMatrix } from '../../src/sim/circuitMatrix.js';
 import { nativeKernelAgreement } from '../../src/sim/nativeKernelAgreement.js';
 import { expectComplexArrayClose } from '../helpers/close.js';

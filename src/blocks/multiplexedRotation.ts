@@ -4,8 +4,11 @@ import { param } from '../circuit/angle.js';
 import { defineBlock } from '../circuit/defineBlock.js';
 import { call, gate, type ModifierOptions } from '../circuit/ops.js';
 import type { Block, CallOp, GateOp } from '../circuit/types.js';
-import { multiplexorAngles } from '../blocks/uniformlyControlledRotation.js';
-import { MULTIPLEXED_RY_KERNEL, MULTIPLEXED_RZ_KERNEL } from '../sim/kernels/multiplexedRotationKernel.js';
+import { multiplexorAngles } from './uniformlyControlledRotation.js';
+
+/** Simulator kernel ids of the multiplexed y- and z-rotation blocks (src/sim/kernels/multiplexedRotationKernel.ts). */
+export const MULTIPLEXED_RY_KERNEL = 'multiplexed-ry';
+export const MULTIPLEXED_RZ_KERNEL = 'multiplexed-rz';
 
 const grayCode = (i: number): number => i ^ (i >> 1);
 
