@@ -23,8 +23,9 @@ describe('fastInverse cost versus ‖A‖', () => {
       expect(encoding.alpha).toBeLessThanOrEqual(1 / w.im + 1e-12);
       expect(encoding.registerBits - base.registerBits).toBeLessThanOrEqual(Math.ceil(Math.log2(s)) + 1);
       const gates = totalGates(blockCounts(encoding.block));
-      // Arithmetic ∝ n·m + m², flag rotations ∝ (1/precision + m): at most quadratic in m/m(1), with a constant 2.
-      expect(gates / baseGates).toBeLessThanOrEqual(2 * (encoding.registerBits / base.registerBits) ** 2);
+      // Gates grow in proportion to the register width m (the QFT's m² part is small at these widths): the
+      // growth ratio stays within 1.5× the width ratio, and m itself grows like log2 s.
+      expect(gates / baseGates).toBeLessThanOrEqual(1.5 * (encoding.registerBits / base.registerBits));
     }
   });
 });
