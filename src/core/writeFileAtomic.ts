@@ -4,15 +4,17 @@
  */
 import { mkdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname } from 'node:path';
+import { InputError } from './InputError.js';
 
+/** @throws InputError naming the path when it cannot be written (permissions, missing device, …). */
 export function writeFileAtomic(path: string, content: string | Uint8Array): void {
-  mkdirSync(dirname(path), { recursive: true });
   const temp = `${path}.${process.pid}.tmp`;
   try {
+    mkdirSync(dirname(path), { recursive: true });
     writeFileSync(temp, content);
     renameSync(temp, path);
   } catch (error) {
     rmSync(temp, { force: true });
-    throw error;
+    throw new InputError(`cannot write "${path}": ${(error as Error).message}`);
   }
 }

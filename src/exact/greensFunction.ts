@@ -124,11 +124,22 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
       return v;
     };
     const sign = particle ? 1 : -1;
+    const fused = target.hamiltonian.steps;
     const run = lanczos({
       apply: (x, y) => {
         applications += 1;
         target.hamiltonian.apply(x, y);
       },
+      steps:
+        fused === null
+          ? null
+          : {
+              ...fused,
+              step: (x, y, s, z) => {
+                applications += 1;
+                return fused.step(x, y, s, z);
+              },
+            },
       start: seed,
       maxSteps: Math.min(dim, maxSteps),
       deflate: [],

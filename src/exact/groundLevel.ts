@@ -6,7 +6,7 @@
 import type { FermionModel } from '../model/FermionModel.js';
 import { fockSector, type FockSector } from './fockSector.js';
 import { memoryLimit } from '../core/memoryBudget.js';
-import { combine, combineByRerun, combineCompact, lanczos, type LanczosSpec } from './internal/lanczos.js';
+import { combine, combineByRerun, combineCompact, lanczos, type LanczosSpec, type LanczosSteps } from './internal/lanczos.js';
 import { groundSectorSpec } from './internal/modelSectors.js';
 import { randomVector } from './internal/randomVector.js';
 import { ensureSectorFits } from './internal/sectorMemory.js';
@@ -95,6 +95,17 @@ export function groundLevel(model: FermionModel, options: GroundLevelOptions = {
     applications += 1;
     hamiltonian.apply(x, y);
   };
+  const fused = hamiltonian.steps;
+  const steps: LanczosSteps | null =
+    fused === null
+      ? null
+      : {
+          ...fused,
+          step: (x, y, s, z) => {
+            applications += 1;
+            return fused.step(x, y, s, z);
+          },
+        };
   const states: CVec[] = [];
   let energy = Number.NaN;
   let gap: number | null = null;
@@ -107,7 +118,7 @@ export function groundLevel(model: FermionModel, options: GroundLevelOptions = {
     if (found === dim || size < 1e-8) break;
     scale(1 / size, start);
     const target = found === 0 ? null : energy + degTol * Math.max(1, Math.abs(energy));
-    const lowest = lowestEigenpair(apply, start, states, { tol, maxSteps: stepsPerCycle, mode, complex, aboveOf: target, dim });
+    const lowest = lowestEigenpair(apply, steps, start, states, { tol, maxSteps: stepsPerCycle, mode, complex, aboveOf: target, dim });
     if (target !== null && lowest.value > target) {
       gap = lowest.value - energy;
       break;
@@ -136,6 +147,7 @@ interface LowestOptions {
 /** Lowest eigenpair in the complement of `deflate`, by restarted Lanczos. */
 function lowestEigenpair(
   apply: (x: CVec, y: CVec) => void,
+  steps: LanczosSteps | null,
   start0: CVec,
   deflate: readonly CVec[],
   o: LowestOptions,
@@ -148,6 +160,7 @@ function lowestEigenpair(
     const stopAt = o.mode === 'compact' && cycle === 0 ? Math.max(0.5 * o.tol, COMPACT_FLOOR) : 0.5 * o.tol;
     const spec: LanczosSpec = {
       apply,
+      steps,
       start,
       maxSteps: Math.min(o.maxSteps, o.dim),
       deflate,

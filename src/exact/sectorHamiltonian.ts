@@ -7,7 +7,8 @@ import { availableParallelism } from 'node:os';
 import type { FermionModel } from '../model/FermionModel.js';
 import { applyLadders } from './internal/bits.js';
 import { hamiltonianTerms, type HamiltonianTerms, type Hop } from './internal/hamiltonianTerms.js';
-import { applyRealRows, type KernelBlock } from './internal/realKernel.js';
+import type { LanczosSteps } from './internal/lanczos.js';
+import { applyRealRows, applyRowOp, type KernelBlock, type RowOp, type RowStep } from './internal/realKernel.js';
 import { isShared, rowThreads } from './internal/rowThreads.js';
 import { sharedFloat64, type CVec } from './internal/vec.js';
 import type { FockSector } from './fockSector.js';
@@ -29,7 +30,7 @@ export interface SectorHamiltonianOptions {
   /**
    * Threads for products of a real H (the caller plus threads − 1 workers). Default from
    * PARALLEL_DIMENSION on: POLEWRIGHT_EXACT_THREADS, else 2 (capped by the cores available); below it 1.
-   * On an idle 2-core machine two threads halve a product at dimension 853,776 (48 → 25 ms).
+   * A product at dimension 853,776 takes ~15 ms on one thread; a busy core slows the split one down.
    */
   readonly threads?: number;
 }
@@ -50,6 +51,11 @@ export interface SectorHamiltonian {
   readonly diagonal: Float64Array;
   /** y = H x (y is overwritten; x and y must not alias; y complex whenever x is or H is complex). */
   apply(x: CVec, y: CVec): void;
+  /**
+   * Lanczos step operations on real vectors, split among the threads like products (the same bytes
+   * on any number of threads). Null when H is complex or has generic terms.
+   */
+  readonly steps: LanczosSteps | null;
   /** Ends the worker threads, if any; later products run on the calling thread. */
   release(): void;
 }
@@ -160,10 +166,46 @@ export function sectorHamiltonian(model: FermionModel, sector: FockSector, optio
   const threads = options.threads ?? (sector.dimension >= PARALLEL_DIMENSION ? threadsFromEnvironment() : 1);
   let pool = threads >= 2 && terms.real ? rowThreads(kernelBlocks, diagonal, threads) : null;
 
-  function applyReal(x: Float64Array, y: Float64Array): void {
-    if (pool !== null && isShared(x) && isShared(y)) pool.apply(x, y);
-    else applyRealRows(kernelBlocks, diagonal, x, y, 0, 1);
+  function applyReal(x: Float64Array, y: Float64Array, step: RowStep | null): void {
+    if (pool !== null && isShared(x) && isShared(y) && (step === null || isShared(step.z))) pool.apply(x, y, step);
+    else applyRealRows(kernelBlocks, diagonal, x, y, 0, 1, step);
   }
+
+  /** Row sums of the step operations, written by every thread. */
+  const partials = new Float64Array(new SharedArrayBuffer(8 * kernelBlocks.reduce((rows, b) => rows + b.nLow, 0)));
+
+  function rowSum(): number {
+    let sum = 0;
+    for (let r = 0; r < partials.length; r++) sum += partials[r]!;
+    return sum;
+  }
+
+  function realOf(...vectors: CVec[]): Float64Array[] {
+    if (vectors.some((v) => v.im !== null)) throw new Error('sectorHamiltonian.steps: vectors must be real');
+    return vectors.map((v) => v.re);
+  }
+
+  function runRows(op: RowOp, vectors: readonly Float64Array[]): void {
+    if (pool !== null && vectors.every(isShared)) pool.run(op);
+    else applyRowOp(kernelBlocks, op, 0, 1);
+  }
+
+  const steps: LanczosSteps = {
+    step(x: CVec, y: CVec, s: number, z: CVec): number {
+      const [xr, yr, zr] = realOf(x, y, z);
+      applyReal(xr!, yr!, { s, z: zr!, partials });
+      return rowSum();
+    },
+    subtractNorm(a: number, v: CVec, w: CVec): number {
+      const [vr, wr] = realOf(v, w);
+      runRows({ kind: 'subtractNorm', a, v: vr!, w: wr!, partials }, [vr!, wr!]);
+      return Math.sqrt(rowSum());
+    },
+    scale(c: number, w: CVec): void {
+      const [wr] = realOf(w);
+      runRows({ kind: 'scale', c, w: wr! }, [wr!]);
+    },
+  };
 
   function applyComplex(xr: Float64Array, xi: Float64Array, yr: Float64Array, yi: Float64Array): void {
     for (const block of sector.blocks) {
@@ -289,10 +331,11 @@ export function sectorHamiltonian(model: FermionModel, sector: FockSector, optio
     sector,
     real: terms.real,
     diagonal,
+    steps: terms.real && terms.generic.length === 0 ? steps : null,
     apply(x: CVec, y: CVec): void {
       if (y.im === null) {
         if (x.im !== null || !terms.real) throw new Error('sectorHamiltonian.apply: complex result needs a complex y');
-        applyReal(x.re, y.re);
+        applyReal(x.re, y.re, null);
       } else {
         const xi = x.im ?? new Float64Array(x.re.length);
         applyComplex(x.re, xi, y.re, y.im);

@@ -8,6 +8,7 @@ import cliProgress from 'cli-progress';
 import type { Command } from 'commander';
 import { InputError } from '../../core/InputError.js';
 import { writeFileAtomic } from '../../core/writeFileAtomic.js';
+import { accessSync, constants, mkdirSync } from 'node:fs';
 import { solveExact, type ExactSolution } from '../../exact/solveExact.js';
 import { spectralFunction } from '../../exact/spectralFunction.js';
 import { describeModel } from '../../model/describeModel.js';
@@ -73,10 +74,22 @@ function summary(model: FermionModel, s: ExactSolution, notes: readonly string[]
   return `${lines.join('\n')}\n`;
 }
 
+/** Creates DIR (and parents) and checks it is writable before any work is done. */
+function prepareOutputDirectory(dir: string): void {
+  try {
+    mkdirSync(dir, { recursive: true });
+    accessSync(dir, constants.W_OK);
+  } catch (error) {
+    throw new InputError(`--out: cannot write to "${dir}": ${(error as Error).message}`);
+  }
+}
+
+/** Renders every output first, then writes each file atomically, so a rendering failure writes nothing. */
 async function writeOutputs(dir: string, s: ExactSolution, notes: string[]): Promise<void> {
-  writeFileAtomic(join(dir, 'green.json'), `${JSON.stringify(greenJson(s))}\n`);
-  writeFileAtomic(join(dir, 'green.csv'), greenCsv(s));
-  const written = ['green.json', 'green.csv'];
+  const files: [string, string][] = [
+    ['green.json', `${JSON.stringify(greenJson(s))}\n`],
+    ['green.csv', greenCsv(s)],
+  ];
   const diagonal = s.green.filter((e) => e.i === e.j);
   if (diagonal.length > 0) {
     const svg = await lineChartSvg({
@@ -85,8 +98,7 @@ async function writeOutputs(dir: string, s: ExactSolution, notes: string[]): Pro
       yTitle: 'A(ω) (1/energy)',
       series: diagonal.map((e) => ({ name: `A_${e.i}${e.i}`, x: s.frequencies, y: spectralFunction(e) })),
     });
-    writeFileAtomic(join(dir, 'spectral.svg'), svg);
-    written.push('spectral.svg');
+    files.push(['spectral.svg', svg]);
   } else {
     notes.push('spectral.svg not written: --pairs selects no diagonal entry');
   }
@@ -101,12 +113,12 @@ async function writeOutputs(dir: string, s: ExactSolution, notes: string[]): Pro
         { name: `Im Σ_${e.i}${e.i}`, x: s.frequencies, y: e.im },
       ]),
     });
-    writeFileAtomic(join(dir, 'selfenergy.svg'), svg);
-    written.push('selfenergy.svg');
+    files.push(['selfenergy.svg', svg]);
   } else {
     notes.push('selfenergy.svg not written: the self-energy needs all n² entries of G (drop --pairs)');
   }
-  notes.push(`wrote: ${written.map((f) => join(dir, f)).join(', ')}`);
+  for (const [name, content] of files) writeFileAtomic(join(dir, name), content);
+  notes.push(`wrote: ${files.map(([name]) => join(dir, name)).join(', ')}`);
 }
 
 /** Runs `polewright exact` in-process: writes to stdout (and stderr for progress). */
@@ -115,6 +127,7 @@ export async function exactCommand(file: string, options: ExactCommandOptions): 
   const grid = options.grid === undefined ? undefined : parseGrid(options.grid);
   const model = loadModelFile(file);
   const pairs = options.pairs === undefined ? undefined : parsePairs(options.pairs, model.modes);
+  if (options.out !== undefined) prepareOutputDirectory(options.out);
   const bar = process.stderr.isTTY
     ? new cliProgress.SingleBar({ stream: process.stderr, format: 'exact |{bar}| {value}/{total} continued fractions' }, cliProgress.Presets.shades_classic)
     : null;

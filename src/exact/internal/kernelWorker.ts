@@ -3,7 +3,7 @@
  * SharedArrayBuffers, then flags its slot of a shared Int32Array and wakes the caller (Atomics.notify).
  */
 import { parentPort } from 'node:worker_threads';
-import { applyRealRows, type KernelBlock } from './realKernel.js';
+import { applyRealRows, applyRowOp, type KernelBlock, type RowOp, type RowStep } from './realKernel.js';
 
 interface Setup {
   readonly blocks: readonly KernelBlock[];
@@ -15,7 +15,7 @@ interface Setup {
 }
 
 let setup: Setup | null = null;
-parentPort!.on('message', (message: { setup: Setup } | { x: Float64Array; y: Float64Array }) => {
+parentPort!.on('message', (message: { setup: Setup } | { op: RowOp } | { x: Float64Array; y: Float64Array; step: RowStep | null }) => {
   if ('setup' in message) {
     setup = message.setup;
     return;
@@ -23,7 +23,8 @@ parentPort!.on('message', (message: { setup: Setup } | { x: Float64Array; y: Flo
   const s = setup!;
   let state = 1;
   try {
-    applyRealRows(s.blocks, s.diagonal, message.x, message.y, s.part, s.parts);
+    if ('op' in message) applyRowOp(s.blocks, message.op, s.part, s.parts);
+    else applyRealRows(s.blocks, s.diagonal, message.x, message.y, s.part, s.parts, message.step);
   } catch {
     state = 2;
   }

@@ -3,10 +3,25 @@
  * keeping the basis with full reorthogonalisation (twice, "twice is enough") or a single-precision
  * copy of it, and keeping every vector orthogonal to already-found eigenvectors (deflation).
  */
-import { axpy, dot, norm, orthogonalize, scale, zeroVec, type CVec } from './vec.js';
+import { axpy, dot, norm, orthogonalize, scale, subtractAndDot, subtractAndNorm, zeroVec, type CVec } from './vec.js';
+
+/**
+ * The vector work of a Lanczos step on real vectors, as SectorHamiltonian.steps provides it: sums run
+ * row by row, so they give the same bytes whatever the threads.
+ */
+export interface LanczosSteps {
+  /** y = H x − s z, returning ⟨x|y⟩. */
+  step(x: CVec, y: CVec, s: number, z: CVec): number;
+  /** w −= a v, returning ‖w‖. */
+  subtractNorm(a: number, v: CVec, w: CVec): number;
+  /** w *= c. */
+  scale(c: number, w: CVec): void;
+}
 
 export interface LanczosSpec {
   apply(x: CVec, y: CVec): void;
+  /** Fused (and possibly multi-threaded) step operations for real vectors, used when given. */
+  readonly steps?: LanczosSteps | null;
   /** Normalised start vector (not modified). */
   readonly start: CVec;
   readonly maxSteps: number;
@@ -57,20 +72,28 @@ export function lanczos(spec: LanczosSpec): LanczosRun {
   let betaPrev = 0;
   let scaleSeen = 0;
   let exhausted = false;
+  const fused = spec.complex ? null : (spec.steps ?? null);
   for (let m = 0; m < spec.maxSteps; m++) {
     spec.visit?.(m, v);
     if (spec.visitOnlyLast === true && m === spec.maxSteps - 1) break;
     const w: CVec = spare ?? zeroVec(dim, spec.complex);
-    spec.apply(v, w);
-    if (vPrev !== null) axpy(-betaPrev, 0, vPrev, w);
-    const a = dot(v, w)[0];
-    axpy(-a, 0, v, w);
-    orthogonalize(w, spec.deflate);
-    if (basis !== null) {
-      orthogonalize(w, basis);
-      orthogonalize(w, basis);
+    let a: number;
+    if (fused !== null) a = fused.step(v, w, betaPrev, vPrev ?? v);
+    else {
+      spec.apply(v, w);
+      a = vPrev !== null ? subtractAndDot(betaPrev, vPrev, w, v) : dot(v, w)[0];
     }
-    const b = norm(w);
+    let b: number;
+    if (spec.deflate.length === 0 && basis === null) b = fused !== null ? fused.subtractNorm(a, v, w) : subtractAndNorm(a, v, w);
+    else {
+      axpy(-a, 0, v, w);
+      orthogonalize(w, spec.deflate);
+      if (basis !== null) {
+        orthogonalize(w, basis);
+        orthogonalize(w, basis);
+      }
+      b = norm(w);
+    }
     alpha.push(a);
     beta.push(b);
     scaleSeen = Math.max(scaleSeen, Math.abs(a), b, betaPrev);
@@ -79,13 +102,14 @@ export function lanczos(spec: LanczosSpec): LanczosRun {
       break;
     }
     if (spec.stop?.(alpha, beta) === true) break;
-    scale(1 / b, w);
+    if (fused !== null) fused.scale(1 / b, w);
+    else scale(1 / b, w);
     if (basis !== null) {
       basis.push(w);
       spare = null;
     } else {
       spare = vPrev === null || vPrev === spec.start ? null : vPrev;
-      compact?.push({ re: Float32Array.from(w.re), im: w.im === null ? null : Float32Array.from(w.im) });
+      compact?.push({ re: new Float32Array(w.re), im: w.im === null ? null : new Float32Array(w.im) });
     }
     vPrev = v;
     v = w;

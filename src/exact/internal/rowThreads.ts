@@ -6,14 +6,16 @@
 import { createRequire } from 'node:module';
 import { pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
-import { applyRealRows, type KernelBlock } from './realKernel.js';
+import { applyRealRows, applyRowOp, type KernelBlock, type RowOp, type RowStep } from './realKernel.js';
 
 /** Longest wait for a worker's share of one product before giving up. */
 const WAIT_MS = 120_000;
 
 export interface RowThreads {
-  /** y = H x with both vectors SharedArrayBuffer-backed. */
-  apply(x: Float64Array, y: Float64Array): void;
+  /** y = H x (then `step`, if any) with every vector SharedArrayBuffer-backed. */
+  apply(x: Float64Array, y: Float64Array, step: RowStep | null): void;
+  /** realKernel's RowOp on SharedArrayBuffer-backed vectors, split by the same rows. */
+  run(op: RowOp): void;
   release(): void;
 }
 
@@ -42,18 +44,32 @@ export function rowThreads(blocks: readonly KernelBlock[], diagonal: Float64Arra
     return worker;
   });
   let released = false;
-  return {
-    apply(x: Float64Array, y: Float64Array): void {
-      if (released) throw new Error('rowThreads: used after release');
-      for (let w = 0; w < workers; w++) {
-        Atomics.store(done, w, 0);
-        pool[w]!.postMessage({ x, y });
-      }
-      applyRealRows(blocks, diagonal, x, y, 0, threads);
-      for (let w = 0; w < workers; w++) {
+  const share = (message: object): void => {
+    if (released) throw new Error('rowThreads: used after release');
+    for (let w = 0; w < workers; w++) {
+      Atomics.store(done, w, 0);
+      pool[w]!.postMessage(message);
+    }
+  };
+  const collect = (): void => {
+    for (let w = 0; w < workers; w++) {
+      // A wake-up can be the late notify of the previous job: wait until the slot really changed.
+      while (Atomics.load(done, w) === 0) {
         if (Atomics.wait(done, w, 0, WAIT_MS) === 'timed-out') throw new Error('rowThreads: a worker did not answer');
-        if (Atomics.load(done, w) !== 1) throw new Error('rowThreads: a worker failed');
       }
+      if (Atomics.load(done, w) !== 1) throw new Error('rowThreads: a worker failed');
+    }
+  };
+  return {
+    apply(x: Float64Array, y: Float64Array, step: RowStep | null): void {
+      share({ x, y, step });
+      applyRealRows(blocks, diagonal, x, y, 0, threads, step);
+      collect();
+    },
+    run(op: RowOp): void {
+      share({ op });
+      applyRowOp(blocks, op, 0, threads);
+      collect();
     },
     release(): void {
       released = true;

@@ -86,6 +86,57 @@ export function axpy(ar: number, ai: number, x: CVec, y: CVec): void {
   }
 }
 
+/** y −= s·x (s real), returning Re⟨v|y⟩ of the updated y from the same pass (same sums as axpy then dot). */
+export function subtractAndDot(s: number, x: CVec, y: CVec, v: CVec): number {
+  const n = y.re.length;
+  const xr = x.re;
+  const yr = y.re;
+  const vr = v.re;
+  let sum = 0;
+  if (y.im === null) {
+    for (let k = 0; k < n; k++) {
+      const w = yr[k]! + -s * xr[k]!;
+      yr[k] = w;
+      sum += vr[k]! * w;
+    }
+    return sum;
+  }
+  const xi = x.im;
+  const yi = y.im;
+  const vi = v.im;
+  for (let k = 0; k < n; k++) {
+    const a = yr[k]! + -s * xr[k]!;
+    const b = xi === null ? yi[k]! : yi[k]! + -s * xi[k]!;
+    yr[k] = a;
+    yi[k] = b;
+    sum += vr[k]! * a + (vi === null ? 0 : vi[k]!) * b;
+  }
+  return sum;
+}
+
+/** y −= s·x (s real), returning ‖y‖ of the updated y from the same pass. */
+export function subtractAndNorm(s: number, x: CVec, y: CVec): number {
+  const n = y.re.length;
+  const xr = x.re;
+  const yr = y.re;
+  let sr = 0;
+  for (let k = 0; k < n; k++) {
+    const w = yr[k]! + -s * xr[k]!;
+    yr[k] = w;
+    sr += w * w;
+  }
+  if (y.im === null) return Math.sqrt(sr);
+  const xi = x.im;
+  const yi = y.im;
+  let si = 0;
+  for (let k = 0; k < n; k++) {
+    const w = xi === null ? yi[k]! : yi[k]! + -s * xi[k]!;
+    yi[k] = w;
+    si += w * w;
+  }
+  return Math.sqrt(sr + si);
+}
+
 export function scale(s: number, x: CVec): void {
   const xr = x.re;
   for (let k = 0; k < xr.length; k++) xr[k]! *= s;
