@@ -61,6 +61,7 @@ function slaterRow(model: FermionModel, TA: ComplexMatrix, V: ComplexMatrix, occ
     unitarityDeviation: Math.abs(state.norm() - 1),
     method: 'state',
     gates: countsToObject(blockCounts(block)),
+    costNotes: [],
     passed: maxError <= tolerance,
   };
 }

@@ -2,7 +2,7 @@
  * encodingCheck: one row of a verification table — an encoding's sizes, α, gate counts and the error
  * found by verifyEncoding, judged against a tolerance.
  */
-import { ancillaQubits, type BlockEncoding } from '../blocks/BlockEncoding.js';
+import { ancillaQubits, type BlockEncoding, type CostNote } from '../blocks/BlockEncoding.js';
 import { blockCounts, countsToObject } from '../circuit/gateCounts.js';
 import { verifyEncoding, type VerifyOptions } from './verifyEncoding.js';
 
@@ -18,6 +18,8 @@ export interface CheckRow {
   readonly unitarityDeviation: number;
   readonly method: 'exhaustive' | 'probe' | 'state';
   readonly gates: Record<string, number>;
+  /** Costs the builder knows beyond the simulated gates (e.g. SELECT by unary iteration). */
+  readonly costNotes: readonly CostNote[];
   readonly passed: boolean;
 }
 
@@ -34,6 +36,7 @@ export function encodingCheck(encoding: BlockEncoding, tolerance: number, option
     unitarityDeviation: report.unitarityDeviation,
     method: report.method,
     gates: countsToObject(blockCounts(encoding.block)),
+    costNotes: encoding.costNotes,
     passed: report.maxError <= Math.max(tolerance, errorBound) && report.unitarityDeviation <= tolerance,
   };
 }

@@ -26,7 +26,7 @@ describe('polewright check MODEL', () => {
     expect(report.ok).toBe(true);
     expect(report.blocks).toHaveLength(3 * 2 + 6 + 4);
     for (const block of report.blocks) {
-      expect(Object.keys(block)).toEqual(['label', 'systemQubits', 'ancillaQubits', 'alpha', 'maxError', 'errorBound', 'gates']);
+      expect(Object.keys(block)).toEqual(['label', 'systemQubits', 'ancillaQubits', 'alpha', 'maxError', 'errorBound', 'gates', 'costNotes']);
       expect(block.maxError).toBeLessThanOrEqual(Math.max(1e-10, block.errorBound));
     }
     // The fast inverse's α = 1/c never exceeds 1/η (default z = grid midpoint + iη, η = 0.1 in this model).
@@ -34,6 +34,10 @@ describe('polewright check MODEL', () => {
       expect(report.blocks.find((b: { label: string }) => b.label === label).alpha).toBeLessThanOrEqual(1 / 0.1 + 1e-12);
     }
     expect(report.blocks.find((b: { label: string }) => b.label === 'creation 1')).toMatchObject({ systemQubits: 3, ancillaQubits: 1, alpha: 1 });
+    // The Pauli LCUs report the Toffoli cost of SELECT by unary iteration (its L − 1 formula is tested in test/blocks).
+    const h = report.blocks.find((b: { label: string }) => b.label === 'H');
+    expect(h.costNotes).toHaveLength(1);
+    expect(h.costNotes[0].source).toMatch(/Babbush/);
   });
 
   it('exits 1 when a block exceeds the tolerance', () => {

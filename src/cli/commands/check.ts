@@ -40,6 +40,7 @@ function jsonReport(rows: readonly CheckRow[], ok: boolean): string {
     maxError: r.maxError,
     errorBound: r.errorBound,
     gates: r.gates,
+    costNotes: r.costNotes,
   }));
   return `${JSON.stringify({ ok, blocks }, null, 2)}\n`;
 }
@@ -64,7 +65,8 @@ function tableReport(heading: string, rows: readonly CheckRow[], tolerance: numb
   const summary = failed === 0
     ? `all ${rows.length} blocks within ${tolerance} (or their own error bound)`
     : `${failed} of ${rows.length} blocks exceed ${tolerance} (or their own error bound)`;
-  return `${heading}\n${table}\n${summary}\n` +
+  const notes = rows.flatMap((r) => r.costNotes.map((n) => `${r.label}: ${n.label}: ${n.toffoli} Toffoli gates (${n.source})\n`));
+  return `${heading}\n${table}\n${summary}\n${notes.join('')}` +
     'max error: largest entry error of <0_anc|U|0_anc> against M/α (exhaustive: every column; probe: random states;\n' +
     'state: prepared amplitudes against the exact Slater determinant). bound: the block\'s rigorous error bound\n' +
     '(register rounding of the fast inverse), "exact" when the construction has none.\n';
