@@ -6,11 +6,8 @@
 import { evaluateAngle } from './angle.js';
 import type { Block, Circuit, MeasureOp, ResetOp, BarrierOp, UnitaryOp } from './types.js';
 
-/** A standard gate with everything resolved: global qubits, numeric parameters, all controls. */
-export interface FlatGate {
-  readonly kind: 'gate';
-  readonly name: string;
-  readonly params: readonly number[];
+/** Operands and modifiers after expansion: global qubits and every control gathered on the way down. */
+interface FlatOperands {
   readonly qubits: readonly number[];
   readonly controls: readonly number[];
   readonly negControls: readonly number[];
@@ -18,16 +15,18 @@ export interface FlatGate {
   readonly power: number;
 }
 
+/** A standard gate with everything resolved: global qubits, numeric parameters, all controls. */
+export interface FlatGate extends FlatOperands {
+  readonly kind: 'gate';
+  readonly name: string;
+  readonly params: readonly number[];
+}
+
 /** A whole block kept for a native kernel: block applied `power` (≥ 1) times, inverted or not. */
-export interface FlatNative {
+export interface FlatNative extends FlatOperands {
   readonly kind: 'native';
   readonly block: Block;
   readonly args: readonly number[];
-  readonly qubits: readonly number[];
-  readonly controls: readonly number[];
-  readonly negControls: readonly number[];
-  readonly inverse: boolean;
-  readonly power: number;
 }
 
 export type FlatOp = FlatGate | FlatNative | MeasureOp | ResetOp | BarrierOp;

@@ -10,6 +10,7 @@ import { fockSector, type FockSector, type SectorSpec } from './fockSector.js';
 import { KEEP_BASIS_DIMENSION, type GroundLevel } from './groundLevel.js';
 import { continuedFraction, evaluateFraction, type ContinuedFraction } from './internal/continuedFraction.js';
 import { lanczos } from './internal/lanczos.js';
+import { countedProducts } from './internal/countedProducts.js';
 import { shiftedSpec } from './internal/modelSectors.js';
 import { ensureSectorFits } from './internal/sectorMemory.js';
 import { dot, scale, zeroVec, type CVec } from './internal/vec.js';
@@ -124,22 +125,10 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
       return v;
     };
     const sign = particle ? 1 : -1;
-    const fused = target.hamiltonian.steps;
     const run = lanczos({
-      apply: (x, y) => {
+      ...countedProducts(target.hamiltonian, () => {
         applications += 1;
-        target.hamiltonian.apply(x, y);
-      },
-      steps:
-        fused === null
-          ? null
-          : {
-              ...fused,
-              step: (x, y, s, z) => {
-                applications += 1;
-                return fused.step(x, y, s, z);
-              },
-            },
+      }),
       start: seed,
       maxSteps: Math.min(dim, maxSteps),
       deflate: [],

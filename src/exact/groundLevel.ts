@@ -7,6 +7,7 @@ import type { FermionModel } from '../model/FermionModel.js';
 import { fockSector, type FockSector } from './fockSector.js';
 import { memoryLimit } from '../core/memoryBudget.js';
 import { combine, combineByRerun, combineCompact, lanczos, type LanczosSpec, type LanczosSteps } from './internal/lanczos.js';
+import { countedProducts } from './internal/countedProducts.js';
 import { groundSectorSpec } from './internal/modelSectors.js';
 import { randomVector } from './internal/randomVector.js';
 import { ensureSectorFits } from './internal/sectorMemory.js';
@@ -91,21 +92,9 @@ export function groundLevel(model: FermionModel, options: GroundLevelOptions = {
   const hamiltonian = sectorHamiltonian(model, sector);
   const complex = !hamiltonian.real;
   let applications = 0;
-  const apply = (x: CVec, y: CVec): void => {
+  const { apply, steps } = countedProducts(hamiltonian, () => {
     applications += 1;
-    hamiltonian.apply(x, y);
-  };
-  const fused = hamiltonian.steps;
-  const steps: LanczosSteps | null =
-    fused === null
-      ? null
-      : {
-          ...fused,
-          step: (x, y, s, z) => {
-            applications += 1;
-            return fused.step(x, y, s, z);
-          },
-        };
+  });
   const states: CVec[] = [];
   let energy = Number.NaN;
   let gap: number | null = null;

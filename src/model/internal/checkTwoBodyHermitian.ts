@@ -2,14 +2,9 @@
 import { HERMITIAN_TOLERANCE } from './checkOneBodyHermitian.js';
 import { formatComplex } from './formatComplex.js';
 import type { Problem } from './Problem.js';
+import type { TwoBodyTerm } from '../FermionModel.js';
 
-export interface PositionedTwoBody {
-  readonly i: number;
-  readonly j: number;
-  readonly k: number;
-  readonly l: number;
-  readonly re: number;
-  readonly im: number;
+export interface PositionedTwoBody extends TwoBodyTerm {
   /** Row of the input list this entry came from. */
   readonly position: number;
 }
