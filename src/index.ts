@@ -23,7 +23,7 @@ export { parseModel } from './model/parseModel.js';
 export { loadModelFile } from './model/loadModelFile.js';
 export { describeModel } from './model/describeModel.js';
 
-export type { FermionOperator, FermionTerm, LadderOp } from './operators/FermionOperator.js';
+export type { LadderSum, LadderTerm, LadderOp } from './operators/LadderSum.js';
 export type { PauliSum, PauliTerm } from './operators/PauliSum.js';
 export { ladder } from './operators/ladder.js';
 export { normalOrder } from './operators/normalOrder.js';
@@ -34,7 +34,7 @@ export { modelHamiltonian } from './operators/modelHamiltonian.js';
 export { jordanWigner } from './operators/jordanWigner.js';
 export { simplifyPauli } from './operators/simplifyPauli.js';
 export { pauliSumMatrix } from './operators/pauliSumMatrix.js';
-export { fermionOperatorMatrix } from './operators/fermionOperatorMatrix.js';
+export { ladderSumMatrix } from './operators/ladderSumMatrix.js';
 
 export { groundLevel } from './exact/groundLevel.js';
 export { greensFunction } from './exact/greensFunction.js';

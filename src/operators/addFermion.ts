@@ -1,7 +1,7 @@
 // addFermion: the sum of fermion operators (terms concatenated; simplify or normal-order to combine them).
-import type { FermionOperator } from './FermionOperator.js';
+import type { LadderSum } from './LadderSum.js';
 
 /** a + b + …; terms are concatenated, not combined (see simplifyFermion, normalOrder). */
-export function addFermion(...operators: readonly FermionOperator[]): FermionOperator {
+export function addFermion(...operators: readonly LadderSum[]): LadderSum {
   return { terms: operators.flatMap((op) => op.terms) };
 }

@@ -1,6 +1,6 @@
-// jordanWigner: maps a FermionOperator to a PauliSum with a_j = Z_0 … Z_{j−1} (X_j + iY_j)/2
+// jordanWigner: maps a LadderSum to a PauliSum with a_j = Z_0 … Z_{j−1} (X_j + iY_j)/2
 // (../shared/CONVENTIONS.md; Jordan & Wigner 1928, Z. Phys. 47, 631).
-import type { FermionOperator } from './FermionOperator.js';
+import type { LadderSum } from './LadderSum.js';
 import { PauliAccumulator } from './internal/PauliAccumulator.js';
 import { multiplyPauli } from './multiplyPauli.js';
 import type { PauliSum } from './PauliSum.js';
@@ -10,7 +10,7 @@ import type { PauliSum } from './PauliSum.js';
  * @returns the simplified image (like strings combined, exact zeros removed).
  * @throws RangeError when a mode is ≥ modes.
  */
-export function jordanWigner(op: FermionOperator, modes: number): PauliSum {
+export function jordanWigner(op: LadderSum, modes: number): PauliSum {
   const images = new Map<number, PauliSum>();
   const image = (mode: number, dagger: boolean): PauliSum => {
     if (mode >= modes) throw new RangeError(`jordanWigner: mode ${mode} ≥ modes ${modes}`);

@@ -1,8 +1,8 @@
-// ladder: the single ladder operator a_mode (dagger false) or a†_mode (dagger true) as a FermionOperator.
-import type { FermionOperator } from './FermionOperator.js';
+// ladder: the single ladder operator a_mode (dagger false) or a†_mode (dagger true) as a LadderSum.
+import type { LadderSum } from './LadderSum.js';
 import { fermionProduct } from './fermionProduct.js';
 
 /** a_mode, or a†_mode when `dagger` is true. */
-export function ladder(mode: number, dagger: boolean): FermionOperator {
+export function ladder(mode: number, dagger: boolean): LadderSum {
   return fermionProduct([{ mode, dagger }]);
 }

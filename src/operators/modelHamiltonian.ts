@@ -1,6 +1,6 @@
-// modelHamiltonian: the FermionOperator of a model's H, or of its split parts A (one-body) and B (the rest).
+// modelHamiltonian: the LadderSum of a model's H, or of its split parts A (one-body) and B (the rest).
 import type { FermionModel } from '../model/FermionModel.js';
-import type { FermionOperator, FermionTerm } from './FermionOperator.js';
+import type { LadderSum, LadderTerm } from './LadderSum.js';
 import { normalOrder } from './normalOrder.js';
 
 /**
@@ -8,10 +8,10 @@ import { normalOrder } from './normalOrder.js';
  * @param options.part 'all' (default) for H; 'A' for Σ (T − T_B)_ij a_i† a_j; 'B' for Σ (T_B)_ij a_i† a_j plus
  *        the two-body part, where T_B is model.oneBodyInB. A + B = H.
  */
-export function modelHamiltonian(model: FermionModel, options: { part?: 'all' | 'A' | 'B' } = {}): FermionOperator {
+export function modelHamiltonian(model: FermionModel, options: { part?: 'all' | 'A' | 'B' } = {}): LadderSum {
   const part = options.part ?? 'all';
   const n = model.modes;
-  const terms: FermionTerm[] = [];
+  const terms: LadderTerm[] = [];
   for (let i = 0; i < n; i++) {
     for (let j = 0; j < n; j++) {
       const e = i * n + j;

@@ -1,6 +1,6 @@
 // normalOrder: rewrites a fermion operator with all creators left of all annihilators, using the CAR
 // {a_i, a_j†} = δ_ij, {a_i, a_j} = 0; like terms combined and zero terms removed.
-import type { FermionOperator } from './FermionOperator.js';
+import type { LadderSum } from './LadderSum.js';
 import { ladderCode } from './internal/ladderCode.js';
 import { TermAccumulator } from './internal/TermAccumulator.js';
 
@@ -9,7 +9,7 @@ import { TermAccumulator } from './internal/TermAccumulator.js';
  * so the adjoint of a canonical product is canonical again. Repeated factors (a_i a_i, a†_i a†_i) vanish.
  * @param options.tolerance drop terms with |c| ≤ tolerance; default 0 removes exact zeros only.
  */
-export function normalOrder(op: FermionOperator, options: { tolerance?: number } = {}): FermionOperator {
+export function normalOrder(op: LadderSum, options: { tolerance?: number } = {}): LadderSum {
   const acc = new TermAccumulator();
   for (const t of op.terms) reduce(t.ops.map(ladderCode), t.re, t.im, acc);
   return acc.result(options.tolerance ?? 0);

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { modelEncodings } from '../../src/blocks/build/modelEncodings.js';
-import { fermionOperatorMatrix } from '../../src/operators/fermionOperatorMatrix.js';
+import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';
 import { modelHamiltonian } from '../../src/operators/modelHamiltonian.js';
 import { verifyEncoding } from '../../src/verify/verifyEncoding.js';
 import { expectComplexArrayClose } from '../helpers/close.js';
@@ -15,7 +15,7 @@ describe('modelEncodings(model)', () => {
         const { H, A, B } = modelEncodings(model);
         for (const [encoding, part] of [[H, 'all'], [A, 'A'], [B, 'B']] as const) {
           // Independent route: the Fock-space matrix built directly from ladder operators on bit strings.
-          expectComplexArrayClose(encoding.exact(), fermionOperatorMatrix(modelHamiltonian(model, { part }), modes), 1e-10, encoding.label);
+          expectComplexArrayClose(encoding.exact(), ladderSumMatrix(modelHamiltonian(model, { part }), modes), 1e-10, encoding.label);
           expect(verifyEncoding(encoding).maxError).toBeLessThan(1e-10);
         }
       }),

@@ -2,8 +2,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { isInputError } from '../../src/core/InputError.js';
 import { parseModel } from '../../src/model/parseModel.js';
-import { fermionOperatorMatrix } from '../../src/operators/fermionOperatorMatrix.js';
-import type { FermionTerm } from '../../src/operators/FermionOperator.js';
+import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';
+import type { LadderTerm } from '../../src/operators/LadderSum.js';
 import { conjTranspose } from '../helpers/complexMatrixOps.js';
 
 type Row = [number, number, number, number, number, number];
@@ -28,12 +28,12 @@ describe('parseModel(input, source) — two-body Hermiticity', () => {
       const all: Row[] = [...rows];
       if (withPartners) rows.forEach((r, n) => all.push(partners(r, forms[n]!)));
       if (perturb) all.push([rows[0]![0], rows[0]![1], rows[0]![2], rows[0]![3], 0, 1]);
-      const terms: FermionTerm[] = all.map(([i, j, k, l, re, im]) => ({
+      const terms: LadderTerm[] = all.map(([i, j, k, l, re, im]) => ({
         ops: [{ mode: i, dagger: true }, { mode: j, dagger: true }, { mode: l, dagger: false }, { mode: k, dagger: false }],
         re: re / 2,
         im: im / 2,
       }));
-      const m = fermionOperatorMatrix({ terms }, 3);
+      const m = ladderSumMatrix({ terms }, 3);
       const adj = conjTranspose(m);
       const hermitian = m.re.every((v, e) => v === adj.re[e]) && m.im.every((v, e) => v === adj.im[e]);
       let accepted = true;

@@ -1,11 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { adjointFermion } from '../../src/operators/adjointFermion.js';
-import { fermionOperatorMatrix } from '../../src/operators/fermionOperatorMatrix.js';
+import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';
 import { fermionProduct } from '../../src/operators/fermionProduct.js';
 import { expectComplexArrayClose } from '../helpers/close.js';
 import { conjTranspose } from '../helpers/complexMatrixOps.js';
-import { fermionOperatorArb } from '../helpers/operatorArbitraries.js';
+import { ladderSumArb } from '../helpers/operatorArbitraries.js';
 
 describe('adjointFermion(op)', () => {
   it('reverses the factors, flips daggers and conjugates the coefficient', () => {
@@ -17,8 +17,8 @@ describe('adjointFermion(op)', () => {
 
   it('has the conjugate-transpose matrix', () => {
     fc.assert(
-      fc.property(fermionOperatorArb(3), (op) => {
-        expectComplexArrayClose(fermionOperatorMatrix(adjointFermion(op), 3), conjTranspose(fermionOperatorMatrix(op, 3)), 1e-12);
+      fc.property(ladderSumArb(3), (op) => {
+        expectComplexArrayClose(ladderSumMatrix(adjointFermion(op), 3), conjTranspose(ladderSumMatrix(op, 3)), 1e-12);
       }),
     );
   });

@@ -1,11 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { anticommutatorFermion } from '../../src/operators/anticommutatorFermion.js';
-import { fermionOperatorMatrix } from '../../src/operators/fermionOperatorMatrix.js';
+import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';
 import { ladder } from '../../src/operators/ladder.js';
 import { expectComplexArrayClose } from '../helpers/close.js';
 import { matAdd, matMul } from '../helpers/complexMatrixOps.js';
-import { fermionOperatorArb } from '../helpers/operatorArbitraries.js';
+import { ladderSumArb } from '../helpers/operatorArbitraries.js';
 
 describe('anticommutatorFermion(a, b)', () => {
   // {a_i, a_j†} = δ_ij, {a_i, a_j} = 0 (Jordan & Wigner 1928, Z. Phys. 47, 631).
@@ -17,10 +17,10 @@ describe('anticommutatorFermion(a, b)', () => {
 
   it('has the matrix AB + BA', () => {
     fc.assert(
-      fc.property(fermionOperatorArb(3, 3, 3), fermionOperatorArb(3, 3, 3), (a, b) => {
-        const ma = fermionOperatorMatrix(a, 3);
-        const mb = fermionOperatorMatrix(b, 3);
-        expectComplexArrayClose(fermionOperatorMatrix(anticommutatorFermion(a, b), 3), matAdd(matMul(ma, mb), matMul(mb, ma)), 1e-12);
+      fc.property(ladderSumArb(3, 3, 3), ladderSumArb(3, 3, 3), (a, b) => {
+        const ma = ladderSumMatrix(a, 3);
+        const mb = ladderSumMatrix(b, 3);
+        expectComplexArrayClose(ladderSumMatrix(anticommutatorFermion(a, b), 3), matAdd(matMul(ma, mb), matMul(mb, ma)), 1e-12);
       }),
     );
   });

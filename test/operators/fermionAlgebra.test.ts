@@ -1,20 +1,20 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { addFermion } from '../../src/operators/addFermion.js';
-import { fermionOperatorMatrix } from '../../src/operators/fermionOperatorMatrix.js';
+import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';
 import { fermionProduct } from '../../src/operators/fermionProduct.js';
 import { multiplyFermion } from '../../src/operators/multiplyFermion.js';
 import { scaleFermion } from '../../src/operators/scaleFermion.js';
 import { simplifyFermion } from '../../src/operators/simplifyFermion.js';
 import { expectComplexArrayClose } from '../helpers/close.js';
 import { matAdd, matMul } from '../helpers/complexMatrixOps.js';
-import { fermionOperatorArb } from '../helpers/operatorArbitraries.js';
+import { ladderSumArb } from '../helpers/operatorArbitraries.js';
 
-const m = (op: Parameters<typeof fermionOperatorMatrix>[0]) => fermionOperatorMatrix(op, 3);
+const m = (op: Parameters<typeof ladderSumMatrix>[0]) => ladderSumMatrix(op, 3);
 
 describe('addFermion, scaleFermion, multiplyFermion', () => {
   it('addFermion(a, b) has the matrix A + B', () => {
-    fc.assert(fc.property(fermionOperatorArb(3), fermionOperatorArb(3), (a, b) => {
+    fc.assert(fc.property(ladderSumArb(3), ladderSumArb(3), (a, b) => {
       expectComplexArrayClose(m(addFermion(a, b)), matAdd(m(a), m(b)), 1e-12);
     }));
   });
@@ -24,7 +24,7 @@ describe('addFermion, scaleFermion, multiplyFermion', () => {
   });
 
   it('multiplyFermion(a, b) has the matrix AB', () => {
-    fc.assert(fc.property(fermionOperatorArb(3, 3, 3), fermionOperatorArb(3, 3, 3), (a, b) => {
+    fc.assert(fc.property(ladderSumArb(3, 3, 3), ladderSumArb(3, 3, 3), (a, b) => {
       expectComplexArrayClose(m(multiplyFermion(a, b)), matMul(m(a), m(b)), 1e-12);
     }));
   });

@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import type { ComplexMatrix } from '../../src/model/FermionModel.js';
 import { parseModel } from '../../src/model/parseModel.js';
 import { addFermion } from '../../src/operators/addFermion.js';
-import { fermionOperatorMatrix } from '../../src/operators/fermionOperatorMatrix.js';
+import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';
 import { fermionProduct } from '../../src/operators/fermionProduct.js';
 import { isHermitianPauli } from '../../src/operators/isHermitianPauli.js';
 import { jordanWigner } from '../../src/operators/jordanWigner.js';
@@ -34,13 +34,13 @@ const hop = (i: number, j: number, t: number) =>
 describe('modelHamiltonian(model, options)', () => {
   it('represents U n↑ n↓ − μ N of a Hubbard chain as the occupation-bit diagonal', () => {
     const model = parseModel({ lattice: { shape: 'chain', sites: 3, hopping: 0 }, interaction: 2.5, chemicalPotential: 0.75, electrons: 3 }, 'h.json');
-    expectComplexArrayClose(fermionOperatorMatrix(modelHamiltonian(model), 6), hubbardDiagonal(3, 2.5, 0.75), 1e-14);
+    expectComplexArrayClose(ladderSumMatrix(modelHamiltonian(model), 6), hubbardDiagonal(3, 2.5, 0.75), 1e-14);
   });
 
   it('gives the Hubbard dimer as diagonal plus −t hopping in each spin block', () => {
     const model = parseModel({ lattice: { shape: 'chain', sites: 2, hopping: 1 }, interaction: 4, chemicalPotential: 2, electrons: 2 }, 'd.json');
-    const hopping = fermionOperatorMatrix(addFermion(hop(0, 1, 1), hop(2, 3, 1)), 4);
-    expectComplexArrayClose(fermionOperatorMatrix(modelHamiltonian(model), 4), matAdd(hubbardDiagonal(2, 4, 2), hopping), 1e-14);
+    const hopping = ladderSumMatrix(addFermion(hop(0, 1, 1), hop(2, 3, 1)), 4);
+    expectComplexArrayClose(ladderSumMatrix(modelHamiltonian(model), 4), matAdd(hubbardDiagonal(2, 4, 2), hopping), 1e-14);
   });
 
   it('has the Hubbard-dimer ground energy (U − c)/2 − 2μ, c = √(U² + 16t²), at half filling', () => {
@@ -49,7 +49,7 @@ describe('modelHamiltonian(model, options)', () => {
     const [t, u] = [1, 4];
     const mu = u / 2;
     const model = parseModel({ lattice: { shape: 'chain', sites: 2, hopping: t }, interaction: u, chemicalPotential: mu, electrons: 2 }, 'd.json');
-    const h = fermionOperatorMatrix(modelHamiltonian(model), 4);
+    const h = ladderSumMatrix(modelHamiltonian(model), 4);
     const rows = Array.from({ length: 16 }, (_, i) => Array.from(h.re.subarray(i * 16, (i + 1) * 16)));
     const lowest = Math.min(...(eigs(rows).values as unknown as number[]).map(Number));
     expectClose(lowest, (u - Math.sqrt(u * u + 16 * t * t)) / 2 - 2 * mu, 1e-10, 'E0');
@@ -63,13 +63,13 @@ describe('modelHamiltonian(model, options)', () => {
       twoBody: [[0, 2, 0, 2, 3], [2, 0, 2, 0, 3]],
       split: { oneBodyInB: [[0, 1]] },
     }, 'm.json');
-    const m = (part: 'all' | 'A' | 'B') => fermionOperatorMatrix(modelHamiltonian(model, { part }), 3);
+    const m = (part: 'all' | 'A' | 'B') => ladderSumMatrix(modelHamiltonian(model, { part }), 3);
     expectComplexArrayClose(matAdd(m('A'), m('B')), m('all'), 1e-14);
-    const onlyHopping = fermionOperatorMatrix(addFermion(
+    const onlyHopping = ladderSumMatrix(addFermion(
       fermionProduct([{ mode: 0, dagger: true }, { mode: 1, dagger: false }], 0.5, 0.25),
       fermionProduct([{ mode: 1, dagger: true }, { mode: 0, dagger: false }], 0.5, -0.25),
     ), 3);
-    const interaction = fermionOperatorMatrix(fermionProduct([
+    const interaction = ladderSumMatrix(fermionProduct([
       { mode: 0, dagger: true }, { mode: 2, dagger: true }, { mode: 2, dagger: false }, { mode: 0, dagger: false },
     ], 3), 3);
     expectComplexArrayClose(m('B'), matAdd(onlyHopping, interaction), 1e-14);

@@ -1,10 +1,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { fermionOperatorMatrix } from '../../src/operators/fermionOperatorMatrix.js';
+import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';
 import { fermionProduct } from '../../src/operators/fermionProduct.js';
 import { normalOrder } from '../../src/operators/normalOrder.js';
 import { expectComplexArrayClose } from '../helpers/close.js';
-import { fermionOperatorArb } from '../helpers/operatorArbitraries.js';
+import { ladderSumArb } from '../helpers/operatorArbitraries.js';
 
 const c = (mode: number) => ({ mode, dagger: true });
 const a = (mode: number) => ({ mode, dagger: false });
@@ -42,9 +42,9 @@ describe('normalOrder(op, options)', () => {
 
   it('preserves the Fock-space matrix and yields canonical products', () => {
     fc.assert(
-      fc.property(fermionOperatorArb(3, 4, 5), (op) => {
+      fc.property(ladderSumArb(3, 4, 5), (op) => {
         const ordered = normalOrder(op);
-        expectComplexArrayClose(fermionOperatorMatrix(ordered, 3), fermionOperatorMatrix(op, 3), 1e-12);
+        expectComplexArrayClose(ladderSumMatrix(ordered, 3), ladderSumMatrix(op, 3), 1e-12);
         for (const t of ordered.terms) {
           const creators = t.ops.filter((o) => o.dagger).map((o) => o.mode);
           const annihilators = t.ops.filter((o) => !o.dagger).map((o) => o.mode);

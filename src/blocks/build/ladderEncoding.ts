@@ -6,7 +6,7 @@
 import { defineConjugatedBlock } from '../../circuit/defineBlock.js';
 import { gate } from '../../circuit/ops.js';
 import type { GateOp } from '../../circuit/types.js';
-import { fermionOperatorMatrix } from '../../operators/fermionOperatorMatrix.js';
+import { ladderSumMatrix } from '../../operators/ladderSumMatrix.js';
 import { ladder } from '../../operators/ladder.js';
 import { memoiseMatrix, type BlockEncoding } from '../BlockEncoding.js';
 
@@ -28,7 +28,7 @@ export function ladderEncoding(mode: number, dagger: boolean, modes: number): Bl
     systemQubits: modes,
     ancillas: [{ name: 'ladder', size: 1 }],
     alpha: 1,
-    exact: memoiseMatrix(() => fermionOperatorMatrix(ladder(mode, dagger), modes)),
+    exact: memoiseMatrix(() => ladderSumMatrix(ladder(mode, dagger), modes)),
     costNotes: [],
   };
 }

@@ -1,11 +1,11 @@
 // exactInverse: the dense P (w − A)⁻¹ P on the Fock space for A = Σ T_ij a_i† a_j and P the projector onto the
-// electron-number window — from A's matrix (fermionOperatorMatrix), inverted sector by sector through its eigenpairs.
+// electron-number window — from A's matrix (ladderSumMatrix), inverted sector by sector through its eigenpairs.
 import { zeroMatrix } from '../../linalg/zeroMatrix.js';
 import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 import { hermitianEigen } from '../../linalg/hermitianEigen.js';
 import type { ComplexMatrix } from '../../model/FermionModel.js';
-import { fermionOperatorMatrix } from '../../operators/fermionOperatorMatrix.js';
-import type { FermionTerm } from '../../operators/FermionOperator.js';
+import { ladderSumMatrix } from '../../operators/ladderSumMatrix.js';
+import type { LadderTerm } from '../../operators/LadderSum.js';
 import type { Window } from './energyGrid.js';
 
 const popcount = (x: number): number => {
@@ -16,7 +16,7 @@ const popcount = (x: number): number => {
 
 export function exactInverse(T: ComplexMatrix, w: ComplexScalar, window: Window): ComplexMatrix {
   const n = T.n;
-  const terms: FermionTerm[] = [];
+  const terms: LadderTerm[] = [];
   for (let i = 0; i < n; i++) {
     for (let j = 0; j < n; j++) {
       const re = T.re[i * n + j]!;
@@ -24,7 +24,7 @@ export function exactInverse(T: ComplexMatrix, w: ComplexScalar, window: Window)
       if (re !== 0 || im !== 0) terms.push({ ops: [{ mode: i, dagger: true }, { mode: j, dagger: false }], re, im });
     }
   }
-  const A = fermionOperatorMatrix({ terms }, n);
+  const A = ladderSumMatrix({ terms }, n);
   const dim = 2 ** n;
   const out = zeroMatrix(dim);
   for (let N = window.min; N <= window.max; N++) {

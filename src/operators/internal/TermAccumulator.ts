@@ -1,5 +1,5 @@
 // TermAccumulator: sums coefficients of identical factor lists (keyed by their codes), then drops small ones.
-import type { FermionOperator } from '../FermionOperator.js';
+import type { LadderSum } from '../LadderSum.js';
 import { ladderFromCode } from './ladderCode.js';
 
 export class TermAccumulator {
@@ -16,7 +16,7 @@ export class TermAccumulator {
   }
 
   /** Terms with |c| > tolerance (tolerance 0 removes exact zeros only), in first-seen order. */
-  result(tolerance: number): FermionOperator {
+  result(tolerance: number): LadderSum {
     const terms = [];
     for (const { codes, re, im } of this.sums.values()) {
       if (Math.hypot(re, im) > tolerance || (tolerance === 0 && (re !== 0 || im !== 0))) {

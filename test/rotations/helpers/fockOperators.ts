@@ -1,19 +1,19 @@
 // Test-only dense Fock-space operators built independently of the rotation code: rotated creation operators and H₁ = Σ T_ij a_i† a_j.
 import type { ComplexMatrix } from '../../../src/model/FermionModel.js';
 import { addFermion } from '../../../src/operators/addFermion.js';
-import { fermionOperatorMatrix } from '../../../src/operators/fermionOperatorMatrix.js';
+import { ladderSumMatrix } from '../../../src/operators/ladderSumMatrix.js';
 import { fermionProduct } from '../../../src/operators/fermionProduct.js';
 
 /** The dense matrix of b_k† = Σ_j V_jk a_j† on the 2^n Fock space. */
 export function rotatedCreationMatrix(V: ComplexMatrix, k: number): ComplexMatrix {
   const n = V.n;
   const terms = Array.from({ length: n }, (_, j) => fermionProduct([{ mode: j, dagger: true }], V.re[j * n + k]!, V.im[j * n + k]!));
-  return fermionOperatorMatrix(addFermion(...terms), n);
+  return ladderSumMatrix(addFermion(...terms), n);
 }
 
 /** The dense matrix of a_k† on n modes. */
 export function creationMatrix(n: number, k: number): ComplexMatrix {
-  return fermionOperatorMatrix(fermionProduct([{ mode: k, dagger: true }]), n);
+  return ladderSumMatrix(fermionProduct([{ mode: k, dagger: true }]), n);
 }
 
 /** The dense matrix of Σ_ij T_ij a_i† a_j. */
@@ -25,7 +25,7 @@ export function oneBodyMatrix(T: ComplexMatrix): ComplexMatrix {
       terms.push(fermionProduct([{ mode: i, dagger: true }, { mode: j, dagger: false }], T.re[i * n + j]!, T.im[i * n + j]!));
     }
   }
-  return fermionOperatorMatrix(addFermion(...terms), n);
+  return ladderSumMatrix(addFermion(...terms), n);
 }
 
 /** The dense matrix of Σ_k ε_k n_k. */

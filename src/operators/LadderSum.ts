@@ -1,5 +1,5 @@
 /**
- * FermionOperator: a sum of products of ladder operators with complex coefficients,
+ * LadderSum: a sum of products of ladder operators with complex coefficients,
  * Σ_t c_t · o_t1 o_t2 … (written left to right as in the product; a product with no factors is the identity).
  */
 
@@ -10,12 +10,12 @@ export interface LadderOp {
 }
 
 /** c · ops[0] ops[1] …, c = re + i·im. */
-export interface FermionTerm {
+export interface LadderTerm {
   readonly ops: readonly LadderOp[];
   readonly re: number;
   readonly im: number;
 }
 
-export interface FermionOperator {
-  readonly terms: readonly FermionTerm[];
+export interface LadderSum {
+  readonly terms: readonly LadderTerm[];
 }

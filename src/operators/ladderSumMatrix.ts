@@ -1,10 +1,10 @@
-// fermionOperatorMatrix: the dense matrix of a FermionOperator on the 2^n Fock space (n ≤ 12) by bit manipulation:
+// ladderSumMatrix: the dense matrix of a LadderSum on the 2^n Fock space (n ≤ 12) by bit manipulation:
 // a_j|s> = (−1)^{#occupied modes below j} |s with bit j cleared> when bit j is set, else 0; a_j† likewise.
 import type { ComplexMatrix } from '../model/FermionModel.js';
-import type { FermionOperator } from './FermionOperator.js';
+import type { LadderSum } from './LadderSum.js';
 import { popcount32 } from './internal/popcount.js';
 
-/** Largest mode count fermionOperatorMatrix accepts. */
+/** Largest mode count ladderSumMatrix accepts. */
 export const MAX_DENSE_MODES = 12;
 
 /**
@@ -12,14 +12,14 @@ export const MAX_DENSE_MODES = 12;
  * this is an independent route to jordanWigner's matrix.
  * @throws RangeError when modes > 12 or a mode of `op` is ≥ modes.
  */
-export function fermionOperatorMatrix(op: FermionOperator, modes: number): ComplexMatrix {
-  if (modes > MAX_DENSE_MODES) throw new RangeError(`fermionOperatorMatrix: ${modes} modes > ${MAX_DENSE_MODES}`);
+export function ladderSumMatrix(op: LadderSum, modes: number): ComplexMatrix {
+  if (modes > MAX_DENSE_MODES) throw new RangeError(`ladderSumMatrix: ${modes} modes > ${MAX_DENSE_MODES}`);
   const dim = 1 << modes;
   const re = new Float64Array(dim * dim);
   const im = new Float64Array(dim * dim);
   for (const term of op.terms) {
     const factors = Int32Array.from(term.ops, (o) => {
-      if (o.mode >= modes) throw new RangeError(`fermionOperatorMatrix: mode ${o.mode} ≥ modes ${modes}`);
+      if (o.mode >= modes) throw new RangeError(`ladderSumMatrix: mode ${o.mode} ≥ modes ${modes}`);
       return 2 * o.mode + (o.dagger ? 1 : 0);
     });
     for (let c = 0; c < dim; c++) {
