@@ -7,8 +7,8 @@ import { availableParallelism } from 'node:os';
 import type { FermionModel } from '../model/FermionModel.js';
 import { applyLadders } from './internal/bits.js';
 import { hamiltonianTerms, type HamiltonianTerms, type Hop } from './internal/hamiltonianTerms.js';
-import type { LanczosSteps } from './internal/lanczos.js';
-import { applyRealRows, applyRowOp, type KernelBlock, type RowOp, type RowStep } from './internal/realKernel.js';
+import type { CompactVec, LanczosSteps, LinearTerm, Projection } from './internal/lanczos.js';
+import { applyRealRows, applyRowUpdate, type KernelBlock, type RowStep, type RowUpdate } from './internal/realKernel.js';
 import { isShared, rowThreads } from './internal/rowThreads.js';
 import { sharedFloat64, type CVec } from './internal/vec.js';
 import type { FockSector } from './fockSector.js';
@@ -171,39 +171,54 @@ export function sectorHamiltonian(model: FermionModel, sector: FockSector, optio
     else applyRealRows(kernelBlocks, diagonal, x, y, 0, 1, step);
   }
 
-  /** Row sums of the step operations, written by every thread. */
-  const partials = new Float64Array(new SharedArrayBuffer(8 * kernelBlocks.reduce((rows, b) => rows + b.nLow, 0)));
+  const rowCount = kernelBlocks.reduce((rows, b) => rows + b.nLow, 0);
+  /** Row sums of the step operations (rowCount × sums per row), written by every thread. */
+  let partials = new Float64Array(new SharedArrayBuffer(8 * rowCount));
 
-  function rowSum(): number {
+  function partialsFor(sums: number): Float64Array {
+    if (partials.length < rowCount * sums) partials = new Float64Array(new SharedArrayBuffer(8 * rowCount * sums));
+    return partials;
+  }
+
+  /** Σ over rows of sum `which` of `sums` per row. */
+  function rowSum(sums: number, which: number): number {
     let sum = 0;
-    for (let r = 0; r < partials.length; r++) sum += partials[r]!;
+    for (let r = 0; r < rowCount; r++) sum += partials[r * sums + which]!;
     return sum;
   }
 
-  function realOf(...vectors: CVec[]): Float64Array[] {
-    if (vectors.some((v) => v.im !== null)) throw new Error('sectorHamiltonian.steps: vectors must be real');
-    return vectors.map((v) => v.re);
+  function realOf(vector: CVec): Float64Array {
+    if (vector.im !== null) throw new Error('sectorHamiltonian.steps: vectors must be real');
+    return vector.re;
   }
 
-  function runRows(op: RowOp, vectors: readonly Float64Array[]): void {
-    if (pool !== null && vectors.every(isShared)) pool.run(op);
-    else applyRowOp(kernelBlocks, op, 0, 1);
+  function runRows(op: RowUpdate): void {
+    const vectors = [op.w, ...op.vectors, ...op.against];
+    if (pool !== null && vectors.every(isShared) && (op.copy === null || isShared(op.copy))) pool.run(op);
+    else applyRowUpdate(kernelBlocks, op, 0, 1);
   }
 
   const steps: LanczosSteps = {
-    step(x: CVec, y: CVec, s: number, z: CVec): number {
-      const [xr, yr, zr] = realOf(x, y, z);
-      applyReal(xr!, yr!, { s, z: zr!, partials });
-      return rowSum();
+    step(x: CVec, c: number, y: CVec, s: number, z: CVec): number {
+      applyReal(realOf(x), realOf(y), { c, s, z: realOf(z), partials: partialsFor(1) });
+      return rowSum(1, 0);
     },
-    subtractNorm(a: number, v: CVec, w: CVec): number {
-      const [vr, wr] = realOf(v, w);
-      runRows({ kind: 'subtractNorm', a, v: vr!, w: wr!, partials }, [vr!, wr!]);
-      return Math.sqrt(rowSum());
-    },
-    scale(c: number, w: CVec): void {
-      const [wr] = realOf(w);
-      runRows({ kind: 'scale', c, w: wr! }, [wr!]);
+    update(terms: readonly LinearTerm[], w: CVec, against: readonly CVec[], copy: CompactVec | null): Projection {
+      if (terms.some((t) => t.im !== 0)) throw new Error('sectorHamiltonian.steps: coefficients must be real');
+      if (copy !== null && copy.im !== null) throw new Error('sectorHamiltonian.steps: the copy must be real');
+      const sums = 1 + against.length;
+      runRows({
+        coefs: terms.map((t) => t.re),
+        vectors: terms.map((t) => realOf(t.v)),
+        w: realOf(w),
+        against: against.map(realOf),
+        copy: copy?.re ?? null,
+        partials: partialsFor(sums),
+      });
+      return {
+        normSquared: rowSum(sums, 0),
+        overlaps: against.map((_, j) => [rowSum(sums, 1 + j), 0] as const),
+      };
     },
   };
 

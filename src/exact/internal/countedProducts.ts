@@ -21,9 +21,9 @@ export function countedProducts(
         ? null
         : {
             ...fused,
-            step: (x, y, s, z) => {
+            step: (x, c, y, s, z) => {
               onProduct();
-              return fused.step(x, y, s, z);
+              return fused.step(x, c, y, s, z);
             },
           },
   };

@@ -3,7 +3,7 @@
  * SharedArrayBuffers, then flags its slot of a shared Int32Array and wakes the caller (Atomics.notify).
  */
 import { parentPort } from 'node:worker_threads';
-import { applyRealRows, applyRowOp, type KernelBlock, type RowOp, type RowStep } from './realKernel.js';
+import { applyRealRows, applyRowUpdate, type KernelBlock, type RowUpdate, type RowStep } from './realKernel.js';
 
 interface Setup {
   readonly blocks: readonly KernelBlock[];
@@ -15,7 +15,7 @@ interface Setup {
 }
 
 let setup: Setup | null = null;
-parentPort!.on('message', (message: { setup: Setup } | { op: RowOp } | { x: Float64Array; y: Float64Array; step: RowStep | null }) => {
+parentPort!.on('message', (message: { setup: Setup } | { op: RowUpdate } | { x: Float64Array; y: Float64Array; step: RowStep | null }) => {
   if ('setup' in message) {
     setup = message.setup;
     return;
@@ -23,7 +23,7 @@ parentPort!.on('message', (message: { setup: Setup } | { op: RowOp } | { x: Floa
   const s = setup!;
   let state = 1;
   try {
-    if ('op' in message) applyRowOp(s.blocks, message.op, s.part, s.parts);
+    if ('op' in message) applyRowUpdate(s.blocks, message.op, s.part, s.parts);
     else applyRealRows(s.blocks, s.diagonal, message.x, message.y, s.part, s.parts, message.step);
   } catch {
     state = 2;

@@ -2,20 +2,37 @@
  * lanczos: the three-term Lanczos recurrence for a Hermitian operator (Lanczos 1950), optionally
  * keeping the basis with full reorthogonalisation (twice, "twice is enough") or a single-precision
  * copy of it, and keeping every vector orthogonal to already-found eigenvectors (deflation).
+ * Vectors are normalised lazily (v_k = u_k / n_k): the factor rides along in the next product, which
+ * saves a pass over memory per step.
  */
-import { axpy, dot, norm, orthogonalize, scale, subtractAndDot, subtractAndNorm, zeroVec, type CVec } from './vec.js';
+import { serialSteps } from './serialSteps.js';
+import { axpy, scale, sharedFloat32, zeroVec, type CVec } from './vec.js';
+
+/** One term c·v of a linear combination (c complex; real kernels need im = 0). */
+export interface LinearTerm {
+  readonly re: number;
+  readonly im: number;
+  readonly v: CVec;
+}
+
+/** ‖w‖² and ⟨q|w⟩ for each requested q, from one pass. */
+export interface Projection {
+  readonly normSquared: number;
+  readonly overlaps: readonly (readonly [number, number])[];
+}
 
 /**
- * The vector work of a Lanczos step on real vectors, as SectorHamiltonian.steps provides it: sums run
- * row by row, so they give the same bytes whatever the threads.
+ * The vector work of a Lanczos step. Sums run row by row in a fixed order, so a threaded
+ * implementation gives the same bytes whatever the number of threads.
  */
 export interface LanczosSteps {
-  /** y = H x − s z, returning ⟨x|y⟩. */
-  step(x: CVec, y: CVec, s: number, z: CVec): number;
-  /** w −= a v, returning ‖w‖. */
-  subtractNorm(a: number, v: CVec, w: CVec): number;
-  /** w *= c. */
-  scale(c: number, w: CVec): void;
+  /** y = c·H x − s·z (y overwritten), returning Re⟨x|y⟩. */
+  step(x: CVec, c: number, y: CVec, s: number, z: CVec): number;
+  /**
+   * w −= Σ c_k v_k, then ‖w‖² and ⟨q|w⟩ for every q of `against`; with `copy`, w is also written
+   * there rounded to single precision.
+   */
+  update(terms: readonly LinearTerm[], w: CVec, against: readonly CVec[], copy: CompactVec | null): Projection;
 }
 
 export interface LanczosSpec {
@@ -34,8 +51,8 @@ export interface LanczosSpec {
   readonly complex: boolean;
   /** Called after each step with α_0…α_m and β_1…β_{m+1}; return true to stop. */
   stop?(alpha: readonly number[], beta: readonly number[]): boolean;
-  /** Called with each Lanczos vector v_k as it is formed (before step k). */
-  visit?(k: number, v: CVec): void;
+  /** Called with each Lanczos vector v_k = scale·u as it is formed (before step k). */
+  visit?(k: number, u: CVec, scale: number): void;
   /** Return right after visiting v_{maxSteps−1}, skipping its product with H. */
   readonly visitOnlyLast?: boolean;
 }
@@ -46,15 +63,17 @@ export interface LanczosRun {
   readonly beta: number[];
   /** The Krylov space closed (β ≈ 0): the recurrence is exact. */
   readonly exhausted: boolean;
+  /** Orthonormal v_0, v_1, … when keepBasis was asked for. */
   readonly basis: CVec[] | null;
-  /** v_1, v_2, … rounded to single precision when compactBasis was asked for. */
+  /** v_1, v_2, … in single precision when compactBasis was asked for. */
   readonly compact: CompactVec[] | null;
 }
 
-/** A vector rounded to single precision (half the memory of a CVec). */
+/** A vector rounded to single precision (half the memory of a CVec); it stands for scale·(re + i im). */
 export interface CompactVec {
   readonly re: Float32Array;
   readonly im: Float32Array | null;
+  scale: number;
 }
 
 /** Relative size of β below which the Krylov space counts as exhausted. */
@@ -62,60 +81,65 @@ export const EXHAUSTED = 1e-12;
 
 export function lanczos(spec: LanczosSpec): LanczosRun {
   const dim = spec.start.re.length;
+  const ops = (spec.complex ? null : (spec.steps ?? null)) ?? serialSteps(spec.apply);
   const alpha: number[] = [];
   const beta: number[] = [];
   const basis: CVec[] | null = spec.keepBasis ? [spec.start] : null;
   const compact: CompactVec[] | null = !spec.keepBasis && spec.compactBasis === true ? [] : null;
-  let v: CVec = spec.start;
-  let vPrev: CVec | null = null;
+  // v_k = u / size; the previous vector is uPrev / sizePrev.
+  let u: CVec = spec.start;
+  let size = 1;
+  let uPrev: CVec | null = null;
+  let sizePrev = 1;
   let spare: CVec | null = null;
-  let betaPrev = 0;
   let scaleSeen = 0;
   let exhausted = false;
-  const fused = spec.complex ? null : (spec.steps ?? null);
   for (let m = 0; m < spec.maxSteps; m++) {
-    spec.visit?.(m, v);
+    spec.visit?.(m, u, 1 / size);
     if (spec.visitOnlyLast === true && m === spec.maxSteps - 1) break;
     const w: CVec = spare ?? zeroVec(dim, spec.complex);
-    let a: number;
-    if (fused !== null) a = fused.step(v, w, betaPrev, vPrev ?? v);
-    else {
-      spec.apply(v, w);
-      a = vPrev !== null ? subtractAndDot(betaPrev, vPrev, w, v) : dot(v, w)[0];
+    // w = H v_k − β_k v_{k−1}, with β_k = size (the norm u_k had when it was formed).
+    const a = ops.step(u, 1 / size, w, uPrev === null ? 0 : size / sizePrev, uPrev ?? u) / size;
+    const against = basis === null ? spec.deflate : [...spec.deflate, ...basis];
+    const rounds = against.length === 0 ? 0 : basis !== null ? 2 : 1;
+    const copy = compact === null ? null : compactVec(dim, spec.complex);
+    let projection = ops.update([{ re: a / size, im: 0, v: u }], w, rounds > 0 ? against : [], rounds > 0 ? null : copy);
+    for (let round = 1; round <= rounds; round++) {
+      const terms = projection.overlaps.map(([re, im], j) => ({ re, im, v: against[j]! }));
+      projection = ops.update(terms, w, round < rounds ? against : [], round < rounds ? null : copy);
     }
-    let b: number;
-    if (spec.deflate.length === 0 && basis === null) b = fused !== null ? fused.subtractNorm(a, v, w) : subtractAndNorm(a, v, w);
-    else {
-      axpy(-a, 0, v, w);
-      orthogonalize(w, spec.deflate);
-      if (basis !== null) {
-        orthogonalize(w, basis);
-        orthogonalize(w, basis);
-      }
-      b = norm(w);
-    }
+    const b = Math.sqrt(projection.normSquared);
     alpha.push(a);
     beta.push(b);
-    scaleSeen = Math.max(scaleSeen, Math.abs(a), b, betaPrev);
+    scaleSeen = Math.max(scaleSeen, Math.abs(a), b, uPrev === null ? 0 : size);
     if (b <= EXHAUSTED * Math.max(scaleSeen, 1e-300) || b === 0) {
       exhausted = true;
       break;
     }
     if (spec.stop?.(alpha, beta) === true) break;
-    if (fused !== null) fused.scale(1 / b, w);
-    else scale(1 / b, w);
+    let wSize = b;
     if (basis !== null) {
+      scale(1 / b, w);
+      wSize = 1;
       basis.push(w);
       spare = null;
     } else {
-      spare = vPrev === null || vPrev === spec.start ? null : vPrev;
-      compact?.push({ re: new Float32Array(w.re), im: w.im === null ? null : new Float32Array(w.im) });
+      spare = uPrev === null || uPrev === spec.start ? null : uPrev;
+      if (copy !== null) {
+        copy.scale = 1 / b;
+        compact!.push(copy);
+      }
     }
-    vPrev = v;
-    v = w;
-    betaPrev = b;
+    uPrev = u;
+    sizePrev = size;
+    u = w;
+    size = wSize;
   }
   return { alpha, beta, exhausted, basis, compact };
+}
+
+function compactVec(dim: number, complex: boolean): CompactVec {
+  return { re: sharedFloat32(dim), im: complex ? sharedFloat32(dim) : null, scale: 1 };
 }
 
 /** Σ_k y_k v_k from a stored basis. */
@@ -133,8 +157,8 @@ export function combineCompact(start: CVec, compact: readonly CompactVec[], y: A
   const out = zeroVec(start.re.length, complex);
   axpy(y[0]!, 0, start, out);
   for (let k = 1; k < y.length; k++) {
-    const c = y[k]!;
     const v = compact[k - 1]!;
+    const c = y[k]! * v.scale;
     const vr = v.re;
     const or = out.re;
     for (let t = 0; t < vr.length; t++) or[t]! += c * vr[t]!;
@@ -153,11 +177,12 @@ export function combineByRerun(spec: LanczosSpec, steps: number, y: ArrayLike<nu
   lanczos({
     ...spec,
     keepBasis: false,
+    compactBasis: false,
     maxSteps: steps,
     stop: undefined,
     visitOnlyLast: true,
-    visit: (k, v) => {
-      if (k < y.length) axpy(y[k]!, 0, v, out);
+    visit: (k, u, scale) => {
+      if (k < y.length) axpy(y[k]! * scale, 0, u, out);
     },
   });
   return out;

@@ -6,7 +6,7 @@
 import { createRequire } from 'node:module';
 import { pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
-import { applyRealRows, applyRowOp, type KernelBlock, type RowOp, type RowStep } from './realKernel.js';
+import { applyRealRows, applyRowUpdate, type KernelBlock, type RowUpdate, type RowStep } from './realKernel.js';
 
 /** Longest wait for a worker's share of one product before giving up. */
 const WAIT_MS = 120_000;
@@ -14,8 +14,8 @@ const WAIT_MS = 120_000;
 export interface RowThreads {
   /** y = H x (then `step`, if any) with every vector SharedArrayBuffer-backed. */
   apply(x: Float64Array, y: Float64Array, step: RowStep | null): void;
-  /** realKernel's RowOp on SharedArrayBuffer-backed vectors, split by the same rows. */
-  run(op: RowOp): void;
+  /** realKernel's RowUpdate on SharedArrayBuffer-backed vectors, split by the same rows. */
+  run(op: RowUpdate): void;
   release(): void;
 }
 
@@ -28,7 +28,7 @@ function workerCode(): string {
   return `import(${JSON.stringify(api)}).then((m) => { m.register(); return import(${JSON.stringify(url)}); });`;
 }
 
-export function isShared(a: Float64Array): boolean {
+export function isShared(a: Float64Array | Float32Array): boolean {
   return a.buffer instanceof SharedArrayBuffer;
 }
 
@@ -66,9 +66,9 @@ export function rowThreads(blocks: readonly KernelBlock[], diagonal: Float64Arra
       applyRealRows(blocks, diagonal, x, y, 0, threads, step);
       collect();
     },
-    run(op: RowOp): void {
+    run(op: RowUpdate): void {
       share({ op });
-      applyRowOp(blocks, op, 0, threads);
+      applyRowUpdate(blocks, op, 0, threads);
       collect();
     },
     release(): void {

@@ -17,6 +17,11 @@ export function sharedFloat64(length: number): Float64Array {
   return length >= SHARED_LENGTH ? new Float64Array(new SharedArrayBuffer(8 * length)) : new Float64Array(length);
 }
 
+/** A zero Float32Array, SharedArrayBuffer-backed from SHARED_LENGTH on. */
+export function sharedFloat32(length: number): Float32Array {
+  return length >= SHARED_LENGTH ? new Float32Array(new SharedArrayBuffer(4 * length)) : new Float32Array(length);
+}
+
 export function zeroVec(dim: number, complex: boolean): CVec {
   return { re: sharedFloat64(dim), im: complex ? sharedFloat64(dim) : null };
 }
@@ -84,57 +89,6 @@ export function axpy(ar: number, ai: number, x: CVec, y: CVec): void {
     yr[k]! += ar * a - ai * b;
     yi[k]! += ar * b + ai * a;
   }
-}
-
-/** y −= s·x (s real), returning Re⟨v|y⟩ of the updated y from the same pass (same sums as axpy then dot). */
-export function subtractAndDot(s: number, x: CVec, y: CVec, v: CVec): number {
-  const n = y.re.length;
-  const xr = x.re;
-  const yr = y.re;
-  const vr = v.re;
-  let sum = 0;
-  if (y.im === null) {
-    for (let k = 0; k < n; k++) {
-      const w = yr[k]! + -s * xr[k]!;
-      yr[k] = w;
-      sum += vr[k]! * w;
-    }
-    return sum;
-  }
-  const xi = x.im;
-  const yi = y.im;
-  const vi = v.im;
-  for (let k = 0; k < n; k++) {
-    const a = yr[k]! + -s * xr[k]!;
-    const b = xi === null ? yi[k]! : yi[k]! + -s * xi[k]!;
-    yr[k] = a;
-    yi[k] = b;
-    sum += vr[k]! * a + (vi === null ? 0 : vi[k]!) * b;
-  }
-  return sum;
-}
-
-/** y −= s·x (s real), returning ‖y‖ of the updated y from the same pass. */
-export function subtractAndNorm(s: number, x: CVec, y: CVec): number {
-  const n = y.re.length;
-  const xr = x.re;
-  const yr = y.re;
-  let sr = 0;
-  for (let k = 0; k < n; k++) {
-    const w = yr[k]! + -s * xr[k]!;
-    yr[k] = w;
-    sr += w * w;
-  }
-  if (y.im === null) return Math.sqrt(sr);
-  const xi = x.im;
-  const yi = y.im;
-  let si = 0;
-  for (let k = 0; k < n; k++) {
-    const w = xi === null ? yi[k]! : yi[k]! + -s * xi[k]!;
-    yi[k] = w;
-    si += w * w;
-  }
-  return Math.sqrt(sr + si);
 }
 
 export function scale(s: number, x: CVec): void {
