@@ -23,7 +23,7 @@ interface HopTable {
   readonly im: Float64Array;
 }
 
-/** Sectors from this dimension on use several threads (worker start-up costs ~0.1 s). */
+/** Sectors from this dimension on use several threads (the first one starts the worker pool, ~0.1 s). */
 export const PARALLEL_DIMENSION = 50_000;
 
 export interface SectorHamiltonianOptions {
@@ -56,7 +56,7 @@ export interface SectorHamiltonian {
    * on any number of threads). Null when H is complex or has generic terms.
    */
   readonly steps: LanczosSteps | null;
-  /** Ends the worker threads, if any; later products run on the calling thread. */
+  /** Lets the pool workers drop this sector's tables; later products run on the calling thread. */
   release(): void;
 }
 

@@ -3,9 +3,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { fockSector, type FockSector } from '../../src/exact/fockSector.js';
-import { groundSectorSpec } from '../../src/exact/internal/modelSectors.js';
+import { groundSectorSpec, shiftedSpec } from '../../src/exact/internal/modelSectors.js';
 import { randomVector } from '../../src/exact/internal/randomVector.js';
-import { sharedFloat32, zeroVec, type CVec } from '../../src/exact/internal/vec.js';
+import { SHARED_LENGTH, sharedFloat32, zeroVec, type CVec } from '../../src/exact/internal/vec.js';
 import type { FermionModel } from '../../src/model/FermionModel.js';
 import { sectorHamiltonian } from '../../src/exact/sectorHamiltonian.js';
 import { sectorIndex } from '../../src/exact/sectorIndex.js';
@@ -130,5 +130,31 @@ describe('sectorHamiltonian(model, sector, { threads })', () => {
       expect(other.projection).toEqual(first.projection);
       expect(Buffer.from(other.copy.re.buffer).equals(Buffer.from(first.copy.re.buffer))).toBe(true);
     }
+  });
+
+  it('shares the worker pool between sectors: interleaved products and a release leave the others exact', () => {
+    const model = hubbard({ sites: 10, hopping: 1, interaction: 4, chemicalPotential: 2, ring: true, spin: 0 });
+    const ground = fockSector(groundSectorSpec(model));
+    const added = fockSector(shiftedSpec(groundSectorSpec(model), 1, [0]));
+    expect(Math.min(ground.dimension, added.dimension)).toBeGreaterThanOrEqual(SHARED_LENGTH);
+    const reference = [ground, added].map((sector) => {
+      const h = sectorHamiltonian(model, sector, { threads: 1 });
+      const y = zeroVec(sector.dimension, false);
+      h.apply(randomVector(sector.dimension, false, 5), y);
+      return Buffer.from(y.re.buffer);
+    });
+    const threaded = [ground, added].map((sector) => sectorHamiltonian(model, sector, { threads: 2 }));
+    const product = (k: number): Buffer => {
+      const sector = k === 0 ? ground : added;
+      const y = zeroVec(sector.dimension, false);
+      threaded[k]!.apply(randomVector(sector.dimension, false, 5), y);
+      return Buffer.from(y.re.buffer);
+    };
+    expect(product(0).equals(reference[0]!)).toBe(true);
+    expect(product(1).equals(reference[1]!)).toBe(true);
+    threaded[0]!.release();
+    expect(product(1).equals(reference[1]!)).toBe(true);
+    expect(product(0).equals(reference[0]!)).toBe(true);
+    threaded[1]!.release();
   });
 });

@@ -1,11 +1,13 @@
 /**
- * kernelWorker: a worker thread that applies realKernel to its share of the rows of vectors held in
- * SharedArrayBuffers, then flags its slot of a shared Int32Array and wakes the caller (Atomics.notify).
+ * kernelWorker: a pool worker thread that applies realKernel to its share of the rows of vectors held
+ * in SharedArrayBuffers, then flags its slot of a shared Int32Array and wakes the caller
+ * (Atomics.notify). It keeps the tables of every sector it was set up for until told to forget it.
  */
 import { parentPort } from 'node:worker_threads';
 import { applyRealRows, applyRowUpdate, type KernelBlock, type RowUpdate, type RowStep } from './realKernel.js';
 
 interface Setup {
+  readonly id: number;
   readonly blocks: readonly KernelBlock[];
   readonly diagonal: Float64Array;
   readonly part: number;
@@ -14,13 +16,19 @@ interface Setup {
   readonly slot: number;
 }
 
-let setup: Setup | null = null;
-parentPort!.on('message', (message: { setup: Setup } | { op: RowUpdate } | { x: Float64Array; y: Float64Array; step: RowStep | null }) => {
+type Job = { readonly id: number } & ({ op: RowUpdate } | { x: Float64Array; y: Float64Array; step: RowStep | null });
+
+const setups = new Map<number, Setup>();
+parentPort!.on('message', (message: { setup: Setup } | { forget: number } | Job) => {
   if ('setup' in message) {
-    setup = message.setup;
+    setups.set(message.setup.id, message.setup);
     return;
   }
-  const s = setup!;
+  if ('forget' in message) {
+    setups.delete(message.forget);
+    return;
+  }
+  const s = setups.get(message.id)!;
   let state = 1;
   try {
     if ('op' in message) applyRowUpdate(s.blocks, message.op, s.part, s.parts);

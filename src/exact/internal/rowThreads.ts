@@ -1,7 +1,8 @@
 /**
  * rowThreads: splits realKernel's rows between the calling thread and worker threads sharing the
  * vectors (SharedArrayBuffer); the caller blocks on Atomics.wait until every worker has flagged done.
- * Workers are unref'd (they never keep the process alive) and end with release().
+ * The workers form one process-wide pool, started on first use (~0.1 s each from sources) and kept
+ * for later sectors; they are unref'd, so they never keep the process alive.
  */
 import { createRequire } from 'node:module';
 import { pathToFileURL } from 'node:url';
@@ -32,23 +33,31 @@ export function isShared(a: Float64Array | Float32Array): boolean {
   return a.buffer instanceof SharedArrayBuffer;
 }
 
-/** `threads` ≥ 2 threads in all: the caller plus threads − 1 workers; `diagonal` must be shared. */
+const pool: Worker[] = [];
+let nextSectorId = 0;
+
+function poolWorkers(count: number): Worker[] {
+  while (pool.length < count) {
+    const worker = new Worker(workerCode(), { eval: true });
+    worker.unref();
+    pool.push(worker);
+  }
+  return pool.slice(0, count);
+}
+
+/** `threads` ≥ 2 threads in all: the caller plus threads − 1 pool workers; `diagonal` must be shared. */
 export function rowThreads(blocks: readonly KernelBlock[], diagonal: Float64Array, threads: number): RowThreads {
   const workers = threads - 1;
   const done = new Int32Array(new SharedArrayBuffer(4 * workers));
-  const code = workerCode();
-  const pool = Array.from({ length: workers }, (_, w) => {
-    const worker = new Worker(code, { eval: true });
-    worker.unref();
-    worker.postMessage({ setup: { blocks, diagonal, part: w + 1, parts: threads, done, slot: w } });
-    return worker;
-  });
+  const id = nextSectorId++;
+  const team = poolWorkers(workers);
+  team.forEach((worker, w) => worker.postMessage({ setup: { id, blocks, diagonal, part: w + 1, parts: threads, done, slot: w } }));
   let released = false;
   const share = (message: object): void => {
     if (released) throw new Error('rowThreads: used after release');
     for (let w = 0; w < workers; w++) {
       Atomics.store(done, w, 0);
-      pool[w]!.postMessage(message);
+      team[w]!.postMessage({ id, ...message });
     }
   };
   const collect = (): void => {
@@ -72,8 +81,9 @@ export function rowThreads(blocks: readonly KernelBlock[], diagonal: Float64Arra
       collect();
     },
     release(): void {
+      if (released) return;
       released = true;
-      for (const worker of pool) void worker.terminate();
+      for (const worker of team) worker.postMessage({ forget: id });
     },
   };
 }
