@@ -73,7 +73,7 @@ export interface LanczosRun {
 export interface CompactVec {
   readonly re: Float32Array;
   readonly im: Float32Array | null;
-  scale: number;
+  readonly scale: number;
 }
 
 /** Relative size of β below which the Krylov space counts as exhausted. */
@@ -111,7 +111,7 @@ export function lanczos(spec: LanczosSpec): LanczosRun {
     const b = Math.sqrt(projection.normSquared);
     alpha.push(a);
     beta.push(b);
-    scaleSeen = Math.max(scaleSeen, Math.abs(a), b, uPrev === null ? 0 : size);
+    scaleSeen = Math.max(scaleSeen, Math.abs(a), b);
     if (b <= EXHAUSTED * Math.max(scaleSeen, 1e-300) || b === 0) {
       exhausted = true;
       break;
@@ -125,10 +125,7 @@ export function lanczos(spec: LanczosSpec): LanczosRun {
       spare = null;
     } else {
       spare = uPrev === null || uPrev === spec.start ? null : uPrev;
-      if (copy !== null) {
-        copy.scale = 1 / b;
-        compact!.push(copy);
-      }
+      if (copy !== null) compact!.push({ ...copy, scale: 1 / b });
     }
     uPrev = u;
     sizePrev = size;

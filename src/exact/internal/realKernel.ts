@@ -143,6 +143,8 @@ export interface RowUpdate {
 export function applyRowUpdate(blocks: readonly KernelBlock[], op: RowUpdate, part: number, parts: number): void {
   const { coefs, vectors, w, against, copy, partials } = op;
   const stride = 1 + against.length;
+  // The last term is subtracted in the same pass as the sum of squares (the common case is one term).
+  const last = coefs.length - 1;
   let rows = 0;
   for (const b of blocks) {
     const D = b.D;
@@ -151,8 +153,6 @@ export function applyRowUpdate(blocks: readonly KernelBlock[], op: RowUpdate, pa
     for (let r = r0; r < r1; r++) {
       const base = b.offset + r * D;
       const end = base + D;
-      // The last term is subtracted in the same pass as the sum of squares (the common case is one term).
-      const last = coefs.length - 1;
       for (let k = 0; k < last; k++) {
         const c = coefs[k]!;
         const v = vectors[k]!;
