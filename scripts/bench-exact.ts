@@ -7,7 +7,8 @@ import { isInputError } from '../src/core/InputError.js';
 import { frequencyGrid } from '../src/exact/frequencyGrid.js';
 import { DEFAULT_GREEN_TOLERANCE, greensFunction } from '../src/exact/greensFunction.js';
 import { groundLevel } from '../src/exact/groundLevel.js';
-import type { ComplexMatrix, FermionModel, TwoBodyTerm } from '../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../src/linalg/ComplexMatrix.js';
+import type { FermionModel, TwoBodyTerm } from '../src/model/FermionModel.js';
 
 function ring(L: number, t: number, U: number): FermionModel {
   const n = 2 * L;

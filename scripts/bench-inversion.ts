@@ -4,7 +4,8 @@ import { blockCounts, totalGates, type GateCounts } from '../src/circuit/gateCou
 import { standardGate } from '../src/circuit/standardGates.js';
 import { directShift } from '../src/inversion/directShift.js';
 import { fastInverse } from '../src/inversion/fastInverse.js';
-import type { ComplexMatrix, FermionModel, TwoBodyTerm } from '../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../src/linalg/ComplexMatrix.js';
+import type { FermionModel, TwoBodyTerm } from '../src/model/FermionModel.js';
 
 /** Hubbard ring of L sites (both spins, up modes first), hopping −s·t, on-site level −s·μ, interaction U (not scaled). */
 function ring(L: number, s: number, t = 1.013719, mu = 0.413731, U = 1): FermionModel {

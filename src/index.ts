@@ -54,9 +54,9 @@ export { tensorEncoding } from './blocks/combine/tensorEncoding.js';
 export { phasedEncoding } from './blocks/combine/phasedEncoding.js';
 export { shiftedEncoding } from './blocks/combine/shiftedEncoding.js';
 export { identityEncoding } from './blocks/combine/identityEncoding.js';
-export { ladderEncoding } from './blocks/build/ladderEncoding.js';
-export { pauliLcu } from './blocks/build/pauliLcu.js';
-export { modelEncodings } from './blocks/build/modelEncodings.js';
+export { ladderEncoding } from './blocks/builders/ladderEncoding.js';
+export { pauliLcu } from './blocks/builders/pauliLcu.js';
+export { modelEncodings } from './blocks/builders/modelEncodings.js';
 export { prepareAmplitudes } from './blocks/prepareAmplitudes.js';
 export { uniformlyControlledRotation } from './blocks/uniformlyControlledRotation.js';
 

@@ -3,7 +3,7 @@
  * The block's local qubits are the system register first (0 … n−1), then the ancilla registers in order.
  */
 import type { Block } from '../circuit/types.js';
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 
 export interface AncillaRegister {
   readonly name: string;

@@ -1,5 +1,6 @@
 /** greenMatrixAt: the full n×n matrix G(z) at one arbitrary complex z (off the poles). */
-import type { ComplexMatrix, FermionModel } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
+import type { FermionModel } from '../model/FermionModel.js';
 import type { GroundLevel } from './groundLevel.js';
 import { greensFunction, type Complex, type GreenOptions } from './greensFunction.js';
 

@@ -4,7 +4,8 @@
  * hole poles ε = E0 − E_m(N−1) with R_ij = ⟨ψ0|a_j†|m⟩⟨m|a_i|ψ0⟩, averaged over the ground level.
  */
 import { InputError } from '../core/InputError.js';
-import type { ComplexMatrix, FermionModel } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
+import type { FermionModel } from '../model/FermionModel.js';
 import { applyLadder } from './applyLadder.js';
 import { fockSector, type FockSector } from './fockSector.js';
 import { denseSector, type DenseSpectrum } from './internal/denseSector.js';

@@ -1,5 +1,5 @@
 /** nonInteractingGreen: G0(z) = (z − T)⁻¹ for the one-body matrix T (chemical potential included). */
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import type { Complex } from './greensFunction.js';
 import { complexInverse } from './internal/complexInverse.js';
 

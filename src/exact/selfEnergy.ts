@@ -1,5 +1,5 @@
 /** selfEnergy: Σ(z) = G0(z)⁻¹ − G(z)⁻¹ = (z − T) − G(z)⁻¹ (CONVENTIONS.md), from the full G matrix at z. */
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import type { Complex } from './greensFunction.js';
 import { complexInverse } from './internal/complexInverse.js';
 import { zMinus } from './nonInteractingGreen.js';

@@ -1,7 +1,7 @@
 // directShift: the direct alternative to fastInverse — the LCU block-encoding of w − H (H = A + B, the model's Pauli LCU),
 // whose α = |w| + ‖H's Pauli coefficients‖₁ grows with ‖A‖.
 import type { BlockEncoding } from '../blocks/BlockEncoding.js';
-import { modelEncodings } from '../blocks/build/modelEncodings.js';
+import { modelEncodings } from '../blocks/builders/modelEncodings.js';
 import { shiftedEncoding } from '../blocks/combine/shiftedEncoding.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';

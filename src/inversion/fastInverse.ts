@@ -7,7 +7,7 @@ import { call, gate } from '../circuit/ops.js';
 import type { UnitaryOp } from '../circuit/types.js';
 import { memoiseMatrix, type AncillaRegister, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { oneBodyRotation, type OneBodyRotationOptions } from '../rotations/oneBodyRotation.js';
 import { energyGrid, type Window } from './internal/energyGrid.js';
 import { weightedSumOps } from './internal/energyArithmetic.js';

@@ -2,7 +2,8 @@
 // the direct shift w − H, each at the particle and the hole shift of the Green's function.
 import type { BlockEncoding } from '../blocks/BlockEncoding.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
-import type { ComplexMatrix, FermionModel } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
+import type { FermionModel } from '../model/FermionModel.js';
 import { directShift } from './directShift.js';
 import { fastInverse, type FastInverseOptions } from './fastInverse.js';
 import { greensShifts } from './greensShifts.js';

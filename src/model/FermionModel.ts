@@ -6,7 +6,7 @@
 
 import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 
-export type { ComplexMatrix };
+
 
 /** One two-body coefficient V_ijkl = <ij|v|kl>; repeated (i,j,k,l) entries are already summed. */
 export interface TwoBodyTerm {

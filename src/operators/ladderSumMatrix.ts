@@ -1,6 +1,6 @@
 // ladderSumMatrix: the dense matrix of a LadderSum on the 2^n Fock space (n ≤ 12) by bit manipulation:
 // a_j|s> = (−1)^{#occupied modes below j} |s with bit j cleared> when bit j is set, else 0; a_j† likewise.
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import type { LadderSum } from './LadderSum.js';
 import { popcount32 } from './internal/popcount.js';
 

@@ -1,5 +1,5 @@
 // pauliSumMatrix: the dense 2^n × 2^n matrix of a Pauli sum (n ≤ 12), little-endian: qubit q is bit q of the index.
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { popcount32 } from './internal/popcount.js';
 import type { PauliSum } from './PauliSum.js';
 

@@ -1,6 +1,6 @@
 // diagonalizeOneBody: the sorted single-particle energies ε and orbitals V of a Hermitian one-body matrix, T = V diag(ε) V†.
 import { hermitianEigen } from '../linalg/hermitianEigen.js';
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { checkHermitian } from './internal/checkHermitian.js';
 
 export interface OneBodyDiagonalization {

@@ -1,5 +1,5 @@
 // fourierMatrix: the unitary discrete Fourier matrix F_jk = e^{2πi jk/n}/√n, the orbital matrix of the fermionic Fourier transform.
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 
 /**
  * F_jk = e^{2πi jk/n}/√n. Its columns are the plane waves that diagonalise any n×n circulant matrix

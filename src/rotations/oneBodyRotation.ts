@@ -3,7 +3,7 @@
  * U(V)† (Σ_k ε_k n_k) U(V) = Σ_ij T_ij a_i† a_j — a Givens network, or per-block fermionic Fourier transforms on rings.
  */
 import type { Block } from '../circuit/types.js';
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { diagonalizeOneBody } from './diagonalizeOneBody.js';
 import { fermionicFourierTransform } from './fermionicFourierTransform.js';
 import { fourierMatrix } from './fourierMatrix.js';

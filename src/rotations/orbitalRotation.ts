@@ -6,7 +6,7 @@ import { defineBlock } from '../circuit/defineBlock.js';
 import { call, gate } from '../circuit/ops.js';
 import type { Block, UnitaryOp } from '../circuit/types.js';
 import { adjointMatrix } from '../linalg/adjointMatrix.js';
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { checkUnitary } from './internal/checkUnitary.js';
 import { clementsDecomposition } from './internal/clementsDecomposition.js';
 import { reckDecomposition } from './internal/reckDecomposition.js';

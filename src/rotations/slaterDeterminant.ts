@@ -5,7 +5,7 @@
 import { defineBlock } from '../circuit/defineBlock.js';
 import { call, gate } from '../circuit/ops.js';
 import type { Block } from '../circuit/types.js';
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { oneBodyRotation, type OneBodyRotationOptions } from './oneBodyRotation.js';
 import { orbitalRotation } from './orbitalRotation.js';
 

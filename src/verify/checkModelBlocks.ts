@@ -5,9 +5,10 @@
  */
 import { call } from '../circuit/ops.js';
 import { defineBlock } from '../circuit/defineBlock.js';
-import type { FermionModel, ComplexMatrix } from '../model/FermionModel.js';
-import { ladderEncoding } from '../blocks/build/ladderEncoding.js';
-import { modelEncodings } from '../blocks/build/modelEncodings.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
+import type { FermionModel } from '../model/FermionModel.js';
+import { ladderEncoding } from '../blocks/builders/ladderEncoding.js';
+import { modelEncodings } from '../blocks/builders/modelEncodings.js';
 import { oneBodyRotation } from '../rotations/oneBodyRotation.js';
 import { slaterDeterminant } from '../rotations/slaterDeterminant.js';
 import { blockCounts, countsToObject } from '../circuit/gateCounts.js';

@@ -3,7 +3,7 @@
  * with an independently computed exact matrix so the verifier can check it.
  */
 import type { Block } from '../circuit/types.js';
-import type { ComplexMatrix } from '../model/FermionModel.js';
+import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { memoiseMatrix, type BlockEncoding } from '../blocks/BlockEncoding.js';
 
 export function unitaryEncoding(label: string, block: Block, exact: () => ComplexMatrix): BlockEncoding {

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { ladderEncoding } from '../../src/blocks/build/ladderEncoding.js';
-import { pauliLcu } from '../../src/blocks/build/pauliLcu.js';
+import { ladderEncoding } from '../../src/blocks/builders/ladderEncoding.js';
+import { pauliLcu } from '../../src/blocks/builders/pauliLcu.js';
 import { adjointEncoding } from '../../src/blocks/combine/adjointEncoding.js';
 import { controlledEncoding } from '../../src/blocks/combine/controlledEncoding.js';
 import { linearCombination } from '../../src/blocks/combine/linearCombination.js';

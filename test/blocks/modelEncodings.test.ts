@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { modelEncodings } from '../../src/blocks/build/modelEncodings.js';
+import { modelEncodings } from '../../src/blocks/builders/modelEncodings.js';
 import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';
 import { modelHamiltonian } from '../../src/operators/modelHamiltonian.js';
 import { verifyEncoding } from '../../src/verify/verifyEncoding.js';

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { CircuitBuilder } from '../../src/circuit/CircuitBuilder.js';
 import { gate, type ModifierOptions } from '../../src/circuit/ops.js';
 import { STANDARD_GATES } from '../../src/circuit/standardGates.js';
-import type { ComplexMatrix } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 import { circuitMatrix } from '../../src/sim/circuitMatrix.js';
 import { matrixFromRows } from '../helpers/complexMatrixOps.js';
 import { REFERENCE_GATES, U, toComplexMatrix } from '../sim/referenceGates.js';

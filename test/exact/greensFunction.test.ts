@@ -8,7 +8,7 @@ import { greensFunction } from '../../src/exact/greensFunction.js';
 import { nonInteractingGreen } from '../../src/exact/nonInteractingGreen.js';
 import { selfEnergy } from '../../src/exact/selfEnergy.js';
 import { seededRandom } from '../../src/core/seededRandom.js';
-import type { ComplexMatrix } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 import { expectClose, expectComplexClose } from '../helpers/close.js';
 import { denseGreen } from '../helpers/denseFock.js';
 import { anderson, hubbard, quadraticModel, randomModel } from '../helpers/models.js';

@@ -1,5 +1,5 @@
 // Dense complex-matrix arithmetic for tests: product, difference, conjugate transpose, from real/complex rows.
-import type { ComplexMatrix } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 
 // Products and adjoints come from src/linalg, whose own tests check them against hand-worked values.
 export { matrixMultiply as matMul } from '../../src/linalg/matrixMultiply.js';

@@ -1,6 +1,7 @@
 // Test-only FermionModel builders: Hubbard chains/rings/atoms, the Anderson impurity and random explicit models.
 import { seededRandom } from '../../src/core/seededRandom.js';
-import type { ComplexMatrix, FermionModel, TwoBodyTerm } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
+import type { FermionModel, TwoBodyTerm } from '../../src/model/FermionModel.js';
 
 function zeros(n: number): ComplexMatrix {
   return { n, re: new Float64Array(n * n), im: new Float64Array(n * n) };

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { hermitianEigen } from '../../src/linalg/hermitianEigen.js';
 import { unitarityError } from '../../src/linalg/unitarityError.js';
-import type { ComplexMatrix } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 import { expectClose, expectComplexArrayClose } from '../helpers/close.js';
 import { matMul, matrixFromRows } from '../helpers/complexMatrixOps.js';
 import { randomHermitian, randomUnitary } from '../rotations/helpers/randomMatrices.js';

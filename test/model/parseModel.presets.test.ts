@@ -1,6 +1,7 @@
 import { eigs } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import type { ComplexMatrix, FermionModel } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
+import type { FermionModel } from '../../src/model/FermionModel.js';
 import { parseModel } from '../../src/model/parseModel.js';
 import { expectClose } from '../helpers/close.js';
 import { matrixFromRows, subMatrix } from '../helpers/complexMatrixOps.js';

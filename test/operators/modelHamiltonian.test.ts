@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { eigs } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import type { ComplexMatrix } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 import { parseModel } from '../../src/model/parseModel.js';
 import { addFermion } from '../../src/operators/addFermion.js';
 import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';

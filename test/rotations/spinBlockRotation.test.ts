@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { ComplexMatrix } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 import { orbitalRotation } from '../../src/rotations/orbitalRotation.js';
 import { spinBlockRotation } from '../../src/rotations/spinBlockRotation.js';
 import { expectComplexArrayClose } from '../helpers/close.js';

@@ -4,7 +4,7 @@
 import * as math from 'mathjs';
 import { evaluateAngle } from '../../src/circuit/angle.js';
 import type { Circuit, UnitaryOp } from '../../src/circuit/types.js';
-import type { ComplexMatrix } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 import { conjTranspose, matMul } from '../helpers/complexMatrixOps.js';
 import { REFERENCE_GATES, controlled, negControlled, principalPower, toComplexMatrix } from './referenceGates.js';
 

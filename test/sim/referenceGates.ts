@@ -1,7 +1,7 @@
 // Matrices of the OpenQASM 3 standard gates written independently of src/, with mathjs, from the
 // OpenQASM 3.0 specification (the U(θ,φ,λ) definition and stdgates.inc — from memory).
 import * as math from 'mathjs';
-import type { ComplexMatrix } from '../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 
 type M = math.Matrix;
 const c = (re: number, im = 0): math.Complex => math.complex(re, im);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { pauliLcu } from '../../src/blocks/build/pauliLcu.js';
+import { pauliLcu } from '../../src/blocks/builders/pauliLcu.js';
 import { verifyEncoding } from '../../src/verify/verifyEncoding.js';
 
 const SUM = {

@@ -1,5 +1,5 @@
 /** complexInverse: inverse of a dense complex matrix by Gauss–Jordan elimination with partial pivoting. */
-import type { ComplexMatrix } from '../../model/FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 
 export function complexInverse(a: ComplexMatrix): ComplexMatrix {
   const n = a.n;

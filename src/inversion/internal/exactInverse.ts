@@ -3,7 +3,7 @@
 import { zeroMatrix } from '../../linalg/zeroMatrix.js';
 import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 import { hermitianEigen } from '../../linalg/hermitianEigen.js';
-import type { ComplexMatrix } from '../../model/FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 import { ladderSumMatrix } from '../../operators/ladderSumMatrix.js';
 import type { LadderTerm } from '../../operators/LadderSum.js';
 import type { Window } from './energyGrid.js';

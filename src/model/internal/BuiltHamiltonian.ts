@@ -1,5 +1,6 @@
 // BuiltHamiltonian: what each model-file form contributes before the common keys are applied.
-import type { ComplexMatrix, ModelForm, TwoBodyTerm } from '../FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
+import type { ModelForm, TwoBodyTerm } from '../FermionModel.js';
 
 export interface BuiltHamiltonian {
   readonly form: ModelForm;

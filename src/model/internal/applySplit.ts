@@ -1,5 +1,5 @@
 // applySplit: the part of T that "split.oneBodyInB" moves from A into B (each listed (i, j) with its partner (j, i)).
-import type { ComplexMatrix } from '../FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 import { zeroComplexMatrix } from './complexMatrix.js';
 import type { Problem } from './Problem.js';
 

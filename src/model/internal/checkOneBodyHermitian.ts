@@ -1,5 +1,5 @@
 // checkOneBodyHermitian: T must equal its conjugate transpose; names the offending entries, then symmetrises rounding.
-import type { ComplexMatrix } from '../FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 import { formatComplex } from './formatComplex.js';
 import type { Problem } from './Problem.js';
 

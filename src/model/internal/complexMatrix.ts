@@ -1,5 +1,5 @@
 // Small helpers for the dense ComplexMatrix of FermionModel.
-import type { ComplexMatrix } from '../FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 
 export function zeroComplexMatrix(n: number): ComplexMatrix {
   return { n, re: new Float64Array(n * n), im: new Float64Array(n * n) };

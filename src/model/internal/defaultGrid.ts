@@ -1,5 +1,6 @@
 // defaultGrid: the frequency window used when a model file gives no "grid".
-import type { ComplexMatrix, FrequencyGrid, TwoBodyTerm } from '../FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
+import type { FrequencyGrid, TwoBodyTerm } from '../FermionModel.js';
 
 /** Points of the default grid. */
 export const DEFAULT_GRID_POINTS = 401;

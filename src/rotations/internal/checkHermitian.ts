@@ -1,6 +1,6 @@
 // checkHermitian: the shared RangeError checks of the diagonalisers for a one-body matrix T (square, finite, Hermitian).
 import { hermiticityError } from '../../linalg/hermiticityError.js';
-import type { ComplexMatrix } from '../../model/FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 
 /** Throws a RangeError starting with `caller` unless T is square, finite and Hermitian within tolerance · max(1, max |T_ij|). */
 export function checkHermitian(T: ComplexMatrix, tolerance: number, caller: string): void {

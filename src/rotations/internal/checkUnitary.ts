@@ -1,5 +1,5 @@
 // checkUnitary: the shared RangeError checks of the rotation builders for an orbital matrix V (square, finite, unitary).
-import type { ComplexMatrix } from '../../model/FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 import { unitarityError } from '../../linalg/unitarityError.js';
 
 /** Throws a RangeError starting with `caller` unless V is an n×n unitary within `tolerance` (max |(V†V − I)_ij|). */

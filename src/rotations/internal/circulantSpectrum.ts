@@ -2,7 +2,7 @@
  * circulantSpectrum: recognises T as `blocks` equal-sized diagonal blocks, each circulant (translation-invariant ring),
  * and returns the plane-wave energies ε_k = Σ_d T_{0,d} e^{2πi dk/L} per block (Davis, Circulant Matrices, 1979).
  */
-import type { ComplexMatrix } from '../../model/FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 
 /**
  * Energies in qubit order (block b, momentum k at index b·L + k), or null when T couples different blocks or a

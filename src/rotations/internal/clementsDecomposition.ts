@@ -3,7 +3,7 @@
  * (depth n) and a diagonal, nulling the lower triangle by alternating column and row rotations
  * (Clements et al., Optica 3, 1460, 2016), then moving the diagonal to the first-applied end.
  */
-import type { ComplexMatrix } from '../../model/FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 import { nullByRows, su2Factor, type TwoModeFactor, type TwoModeFactors } from './twoModeFactors.js';
 
 /** H† = [[ȳ, −x̄], [x, y]] of a column rotation on (mode, mode+1), stored by its first row and column. */

@@ -2,7 +2,7 @@
  * reckDecomposition: factors a unitary u as G_1† ⋯ G_L† D (L = n(n−1)/2 adjacent-row SU(2) rotations, D diagonal)
  * by nulling the below-diagonal entries column by column from the bottom (Reck et al., Phys. Rev. Lett. 73, 58, 1994).
  */
-import type { ComplexMatrix } from '../../model/FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 import { nullByRows, su2Factor, type TwoModeFactor, type TwoModeFactors } from './twoModeFactors.js';
 
 /** The triangular-arrangement factors of a unitary u (not checked here); 2n − 3 rotation layers. */

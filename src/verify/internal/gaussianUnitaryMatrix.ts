@@ -3,7 +3,7 @@
  * one-particle matrix u and fixed vacuum: <T|U|S> = det u[T, S] for occupation sets of equal size, where
  * |S> = a†_{s1} ⋯ a†_{sk} |vac> (s1 < … < sk) is the basis state with those bits set under Jordan–Wigner.
  */
-import type { ComplexMatrix } from '../../model/FermionModel.js';
+import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 import { determinant } from './determinant.js';
 
 function bitsOf(mask: number, n: number): number[] {

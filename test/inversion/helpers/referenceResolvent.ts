@@ -1,7 +1,7 @@
 // Test-only reference for the fast inverse: P (w − A)⁻¹ P from A's Jordan–Wigner Pauli matrix, inverted by Gauss–Jordan
 // elimination, and random Hermitian one-body matrices with prescribed (e.g. dyadic) spectra.
 import fc from 'fast-check';
-import type { ComplexMatrix } from '../../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../../src/linalg/ComplexMatrix.js';
 import { jordanWigner } from '../../../src/operators/jordanWigner.js';
 import { modelHamiltonian } from '../../../src/operators/modelHamiltonian.js';
 import { pauliSumMatrix } from '../../../src/operators/pauliSumMatrix.js';

@@ -1,7 +1,7 @@
 // Test-only checks of the defining relation U(V)† a_k† U(V) = Σ_j V_jk a_j†, U(V)|vac> = |vac>, on one-particle states, whole matrices and random states.
 import { adjointMatrix } from '../../../src/linalg/adjointMatrix.js';
 import type { Block } from '../../../src/circuit/types.js';
-import type { ComplexMatrix } from '../../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../../src/linalg/ComplexMatrix.js';
 import { seededRandom } from '../../../src/core/seededRandom.js';
 import { expectComplexArrayClose } from '../../helpers/close.js';
 import { conjTranspose, matMul } from '../../helpers/complexMatrixOps.js';

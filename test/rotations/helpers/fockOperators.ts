@@ -1,5 +1,5 @@
 // Test-only dense Fock-space operators built independently of the rotation code: rotated creation operators and H₁ = Σ T_ij a_i† a_j.
-import type { ComplexMatrix } from '../../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../../src/linalg/ComplexMatrix.js';
 import { addFermion } from '../../../src/operators/addFermion.js';
 import { ladderSumMatrix } from '../../../src/operators/ladderSumMatrix.js';
 import { fermionProduct } from '../../../src/operators/fermionProduct.js';

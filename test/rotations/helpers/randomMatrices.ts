@@ -1,6 +1,6 @@
 // Test-only random matrices from a seed: complex Gaussian, Haar-ish unitaries (Gram–Schmidt QR with phase fix), Hermitian.
 import { seededRandom, type RandomSource } from '../../../src/core/seededRandom.js';
-import type { ComplexMatrix } from '../../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../../src/linalg/ComplexMatrix.js';
 
 function gaussian(random: RandomSource): number {
   // Box–Muller.

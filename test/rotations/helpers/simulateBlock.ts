@@ -1,7 +1,7 @@
 // Test helpers over the project simulator (src/sim): one block applied to a state, its dense unitary, and its one-particle matrix.
 import { call } from '../../../src/circuit/ops.js';
 import type { Block } from '../../../src/circuit/types.js';
-import type { ComplexMatrix } from '../../../src/model/FermionModel.js';
+import type { ComplexMatrix } from '../../../src/linalg/ComplexMatrix.js';
 import { applyUnitaryOps } from '../../../src/sim/applyUnitaryOps.js';
 import { StateVector } from '../../../src/sim/StateVector.js';
 
