@@ -1,9 +1,10 @@
 /**
  * The OpenQASM 3 standard gate library (stdgates.inc) plus the built-ins U and gphase, each reduced
  * to a canonical form: some leading control qubits and a base action (a 2×2 unitary, a swap, or a
- * global phase), global phases exactly as the specification's definitions give them.
+ * global phase), global phases exactly as the OpenQASM 3.0.0 definitions give them: the built-in U
+ * of the specification's "Built-in gates" section (which carries e^{iθ/2}) and the stdgates.inc
+ * bodies written in terms of it, with their gphase and p(γ − θ/2) compensations.
  */
-
 /** A 2×2 complex matrix [[a, b], [c, d]] as [aRe, aIm, bRe, bIm, cRe, cIm, dRe, dIm]. */
 export type Matrix2 = readonly [number, number, number, number, number, number, number, number];
 
@@ -24,11 +25,16 @@ export interface StandardGate {
   readonly base: (params: readonly number[]) => BaseAction;
 }
 
-/** U(θ, φ, λ) of the OpenQASM 3 specification: [[cos θ/2, −e^{iλ} sin θ/2], [e^{iφ} sin θ/2, e^{i(φ+λ)} cos θ/2]]. */
+/**
+ * e^{i·globalPhase}·U(θ, φ, λ), U the OpenQASM 3.0.0 built-in gate (specification, "Gates" chapter,
+ * "Built-in gates"): ½[[1+e^{iθ}, −ie^{iλ}(1−e^{iθ})], [ie^{iφ}(1−e^{iθ}), e^{i(φ+λ)}(1+e^{iθ})]]
+ * = e^{iθ/2}·[[cos θ/2, −e^{iλ} sin θ/2], [e^{iφ} sin θ/2, e^{i(φ+λ)} cos θ/2]].
+ */
 export function uMatrix(theta: number, phi: number, lambda: number, globalPhase = 0): Matrix2 {
   const c = Math.cos(theta / 2);
   const s = Math.sin(theta / 2);
-  const cis = (angle: number): [number, number] => [Math.cos(angle + globalPhase), Math.sin(angle + globalPhase)];
+  const shift = globalPhase + theta / 2;
+  const cis = (angle: number): [number, number] => [Math.cos(angle + shift), Math.sin(angle + shift)];
   const [g0, g1] = cis(0);
   const [l0, l1] = cis(lambda);
   const [p0, p1] = cis(phi);
@@ -65,11 +71,16 @@ const p1 = (p: readonly number[]): number => p[1] as number;
 const p2 = (p: readonly number[]): number => p[2] as number;
 const p3 = (p: readonly number[]): number => p[3] as number;
 
-const rx = (p: readonly number[]): BaseAction => unitary(uMatrix(p0(p), -Math.PI / 2, Math.PI / 2));
-const ry = (p: readonly number[]): BaseAction => unitary(uMatrix(p0(p), 0, 0));
+// stdgates.inc (3.0.0): rx(θ) = U(θ, −π/2, π/2); gphase(−θ/2), ry(θ) = U(θ, 0, 0); gphase(−θ/2),
+// rz(λ) = gphase(−λ/2); U(0, 0, λ).
+const rx = (p: readonly number[]): BaseAction => unitary(uMatrix(p0(p), -Math.PI / 2, Math.PI / 2, -p0(p) / 2));
+const ry = (p: readonly number[]): BaseAction => unitary(uMatrix(p0(p), 0, 0, -p0(p) / 2));
 const rz = (p: readonly number[]): BaseAction => unitary(uMatrix(0, 0, p0(p), -p0(p) / 2));
 const phaseGate = (p: readonly number[]): BaseAction => unitary(diagonal(p0(p)));
 
+// x, y, h are stored as their exact matrices: U(π, 0, π); gphase(−π/2) = X, U(π, π/2, π/2); gphase(−π/2) = Y
+// and U(π/2, 0, π); gphase(−π/4) = H (stdgates.inc, 3.0.0); test/circuit/stdgatesExpansion.test.ts expands
+// every definition from U, gphase and ctrl @ and compares.
 const GATES: readonly StandardGate[] = [
   gate('U', 3, 1, 0, false, (p) => unitary(uMatrix(p0(p), p1(p), p2(p)))),
   gate('gphase', 1, 0, 0, false, (p) => ({ kind: 'phase', angle: p0(p) })),
@@ -97,14 +108,17 @@ const GATES: readonly StandardGate[] = [
   gate('swap', 0, 2, 0, true, () => ({ kind: 'swap' })),
   gate('ccx', 0, 3, 2, true, () => unitary(X)),
   gate('cswap', 0, 3, 1, true, () => ({ kind: 'swap' })),
-  // cu = p(γ) on the control, then ctrl @ U: the control-1 branch carries e^{iγ} U.
-  gate('cu', 4, 2, 1, false, (p) => unitary(uMatrix(p0(p), p1(p), p2(p), p3(p)))),
+  // cu = p(γ − θ/2) on the control, then ctrl @ U(θ, φ, λ): the control-1 branch carries e^{i(γ−θ/2)} U(θ, φ, λ).
+  gate('cu', 4, 2, 1, false, (p) => unitary(uMatrix(p0(p), p1(p), p2(p), p3(p) - p0(p) / 2))),
+  // CX is the CNOT: the specification's "Built-in gates" section defines CX as ctrl @ X with X = U(π, 0, π);
+  // gphase(−π/2), and its standard-library page calls CX an alias of cx. (The 3.0.0 stdgates.inc body
+  // `ctrl @ U(π, 0, π)` predates the e^{iθ/2} in U and would give ctrl @ iX.)
   gate('CX', 0, 2, 1, true, () => unitary(X)),
   gate('phase', 1, 1, 0, false, phaseGate),
   gate('cphase', 1, 2, 1, false, phaseGate),
   gate('id', 0, 1, 0, true, () => unitary(IDENTITY)),
   gate('u1', 1, 1, 0, false, phaseGate),
-  // stdgates.inc (from memory): u2 = gphase(−(φ+λ+π/2)/2); U(π/2, φ, λ) and u3 = gphase(−(φ+λ+θ)/2); U(θ, φ, λ).
+  // stdgates.inc (3.0.0): u2(φ, λ) = gphase(−(φ+λ+π/2)/2); U(π/2, φ, λ) and u3(θ, φ, λ) = gphase(−(φ+λ+θ)/2); U(θ, φ, λ).
   gate('u2', 2, 1, 0, false, (p) => unitary(uMatrix(Math.PI / 2, p0(p), p1(p), -(p0(p) + p1(p) + Math.PI / 2) / 2))),
   gate('u3', 3, 1, 0, false, (p) => unitary(uMatrix(p0(p), p1(p), p2(p), -(p1(p) + p2(p) + p0(p)) / 2))),
 ];

@@ -137,9 +137,11 @@ export function fastInverse(T: ComplexMatrix, w: ComplexScalar, options: FastInv
   const delta = grid.roundingDelta;
   const rounding = delta === 0 ? 0 : delta / Math.max(eta, energies.c - delta);
   const quantisationBound = rounding + flagOps.piecewiseError;
-  const ancillas: AncillaRegister[] = [{ name: 'flag', size: 1 }, { name: 'energy', size: m }];
-  if (window) ancillas.push({ name: 'electron_counter', size: counterBits }, { name: 'window', size: 1 });
-  if (adder === 'ripple') ancillas.push({ name: 'adder_scratch', size: scratchSize }, { name: 'adder_carry', size: 1 });
+  // Only the flag is a signal qubit: the arithmetic registers are computed and uncomputed around the flag rotation, and
+  // outside the window the flag itself is sent to |1>.
+  const ancillas: AncillaRegister[] = [{ name: 'flag', size: 1, role: 'signal' }, { name: 'energy', size: m, role: 'clean' }];
+  if (window) ancillas.push({ name: 'electron_counter', size: counterBits, role: 'clean' }, { name: 'window', size: 1, role: 'clean' });
+  if (adder === 'ripple') ancillas.push({ name: 'adder_scratch', size: scratchSize, role: 'clean' }, { name: 'adder_carry', size: 1, role: 'clean' });
   const label = options.label ?? 'fast inverse';
   const block = defineConjugatedBlock(
     { name: 'fast_inverse', role: `block-encoding of (w - A)^-1 by orbital rotation, ${m}-bit energy arithmetic and a flag rotation`, qubits: next },

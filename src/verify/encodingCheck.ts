@@ -25,7 +25,7 @@ export interface CheckRow {
 
 export function encodingCheck(encoding: BlockEncoding, tolerance: number, options: VerifyOptions = {}): CheckRow {
   const report = verifyEncoding(encoding, options);
-  const errorBound = encoding.errorBound ?? 0;
+  const errorBound = encoding.errorBound;
   return {
     label: encoding.label,
     systemQubits: encoding.systemQubits,

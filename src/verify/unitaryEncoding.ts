@@ -7,5 +7,5 @@ import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { memoiseMatrix, type BlockEncoding } from '../blocks/BlockEncoding.js';
 
 export function unitaryEncoding(label: string, block: Block, exact: () => ComplexMatrix): BlockEncoding {
-  return { label, block, systemQubits: block.qubits, ancillas: [], alpha: 1, exact: memoiseMatrix(exact), costNotes: [] };
+  return { label, block, systemQubits: block.qubits, ancillas: [], alpha: 1, exact: memoiseMatrix(exact), costNotes: [], errorBound: 0 };
 }

@@ -26,9 +26,10 @@ export function ladderEncoding(mode: number, dagger: boolean, modes: number): Bl
       select,
     ),
     systemQubits: modes,
-    ancillas: [{ name: 'ladder', size: 1 }],
+    ancillas: [{ name: 'ladder', size: 1, role: 'signal' }],
     alpha: 1,
     exact: memoiseMatrix(() => ladderSumMatrix(ladder(mode, dagger), modes)),
     costNotes: [],
+    errorBound: 0,
   };
 }

@@ -44,6 +44,7 @@ function stringEncoding(term: PauliTerm, qubits: number): BlockEncoding {
     alpha: 1,
     exact: memoiseMatrix(() => pauliSumMatrix(unit)),
     costNotes: [],
+    errorBound: 0,
   };
 }
 

@@ -11,9 +11,10 @@ export function zeroEncoding(systemQubits: number, label = '0'): BlockEncoding {
     label,
     block: defineBlock({ name: 'zero_operator', role: 'encodes the zero operator', qubits: systemQubits + 1 }, [gate('x', [systemQubits])]),
     systemQubits,
-    ancillas: [{ name: 'zero_flag', size: 1 }],
+    ancillas: [{ name: 'zero_flag', size: 1, role: 'signal' }],
     alpha: 1,
     exact: memoiseMatrix(() => zeroMatrix(2 ** systemQubits)),
     costNotes: [],
+    errorBound: 0,
   };
 }

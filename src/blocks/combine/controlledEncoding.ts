@@ -1,6 +1,7 @@
 /**
  * controlledEncoding: the controlled version of an encoding. A control qubit joins the system register
- * as its top qubit (index n); the encoded operator is |0><0| ⊗ αI + |1><1| ⊗ M, with the same α.
+ * as its top qubit (index n); the encoded operator is |0><0| ⊗ αI + |1><1| ⊗ M, with the same α, ancillas and error
+ * bound (the projected block is |0><0| ⊗ I + |1><1| ⊗ Ũ, so its error is that of Ũ).
  */
 import { defineBlock } from '../../circuit/defineBlock.js';
 import { call } from '../../circuit/ops.js';
@@ -21,9 +22,12 @@ export function controlledEncoding(encoding: BlockEncoding, label = `controlled 
   const a = ancillaQubits(encoding);
   const inner = [...Array.from({ length: n }, (_, k) => k), ...Array.from({ length: a }, (_, k) => n + 1 + k)];
   return {
-    ...encoding,
     label,
     systemQubits: n + 1,
+    ancillas: encoding.ancillas,
+    alpha: encoding.alpha,
+    costNotes: encoding.costNotes,
+    errorBound: encoding.errorBound,
     block: defineBlock({ name: 'controlled', role: `block-encoding of ${label}`, qubits: n + 1 + a }, [
       call(encoding.block, inner, [], { controls: [n] }),
     ]),

@@ -14,5 +14,6 @@ export function identityEncoding(systemQubits: number): BlockEncoding {
     alpha: 1,
     exact: memoiseMatrix(() => identityMatrix(2 ** systemQubits)),
     costNotes: [],
+    errorBound: 0,
   };
 }

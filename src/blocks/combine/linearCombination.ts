@@ -2,15 +2,19 @@
  * linearCombination: Σ_k c_k M_k from encodings of each M_k, by PREPARE (amplitudes √(|c_k| α_k / λ) on
  * an index register) then SELECT (encoding k, with the phase of c_k, when the index is k) then
  * PREPARE†; α = λ = Σ_k |c_k| α_k. Written in compute/action form, so control reaches only SELECT.
+ * The projected block is Σ_k (|c_k| α_k / λ) e^{i arg c_k} Ũ_k, so its error bound is Σ_k (|c_k| α_k / λ) e_k. The index
+ * register is a signal register; a work qubit is clean when it is clean for every term that uses it (a term leaves the
+ * work qubits beyond its own untouched).
  */
 import { defineConjugatedBlock } from '../../circuit/defineBlock.js';
 import { call, gate } from '../../circuit/ops.js';
 import type { UnitaryOp } from '../../circuit/types.js';
-import { ancillaQubits, memoiseMatrix, type AncillaRegister, type BlockEncoding } from '../BlockEncoding.js';
+import { ancillaQubits, ancillaRoles, memoiseMatrix, type AncillaRegister, type AncillaRole, type BlockEncoding } from '../BlockEncoding.js';
 import { weightedSum } from '../../linalg/weightedSum.js';
 import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 import { prepareAmplitudes } from '../prepareAmplitudes.js';
 import { indexControls } from '../internal/indexControls.js';
+import { registersFromRoles } from '../internal/registersFromRoles.js';
 
 export interface WeightedEncoding {
   readonly coefficient: ComplexScalar;
@@ -41,8 +45,10 @@ export function linearCombination(terms: readonly WeightedEncoding[], label: str
     select.push(call(t.encoding.block, [...system, ...own], [], { controls, negControls }));
     if (phase !== 0) select.push(gate('gphase', [], [phase], { controls, negControls }));
   });
-  const ancillas: AncillaRegister[] = [{ name: 'lcu_index', size: indexBits }];
-  if (work > 0) ancillas.push({ name: 'lcu_work', size: work });
+  const workRoles: AncillaRole[] = Array.from({ length: work }, () => 'clean');
+  for (const t of terms) ancillaRoles(t.encoding).forEach((role, p) => role === 'signal' && (workRoles[p] = 'signal'));
+  const ancillas: AncillaRegister[] = [{ name: 'lcu_index', size: indexBits, role: 'signal' }, ...registersFromRoles('lcu_work', workRoles)];
+  const errorBound = terms.reduce((sum, t, k) => sum + (magnitudes[k]! / lambda) * t.encoding.errorBound, 0);
   return {
     label,
     block: defineConjugatedBlock(
@@ -55,5 +61,6 @@ export function linearCombination(terms: readonly WeightedEncoding[], label: str
     alpha: lambda,
     exact: memoiseMatrix(() => weightedSum(terms.map((t) => ({ weight: t.coefficient, matrix: t.encoding.exact() })), 2 ** n)),
     costNotes: terms.flatMap((t) => t.encoding.costNotes),
+    errorBound,
   };
 }
