@@ -7,6 +7,12 @@ import { CommanderError } from 'commander';
 import { buildProgram } from './program.js';
 import { isInputError } from '../core/InputError.js';
 
+// A reader that closes the pipe early (`polewright … --json | head`) ends the command quietly, not with a stack trace.
+process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+  if (error.code === 'EPIPE') process.exit(0);
+  throw error;
+});
+
 async function main(argv: string[]): Promise<number> {
   const program = buildProgram();
   try {

@@ -1,0 +1,58 @@
+import { existsSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { ensureDirectory } from '../../src/core/ensureDirectory.js';
+import { isInputError } from '../../src/core/InputError.js';
+import { writeFileAtomic } from '../../src/core/writeFileAtomic.js';
+import { writeFolderAtomic } from '../../src/core/writeFolderAtomic.js';
+
+const scratch = () => mkdtempSync(join(tmpdir(), 'polewright-atomic-'));
+
+function inputErrorOf(run: () => void): string {
+  try {
+    run();
+  } catch (error) {
+    expect(isInputError(error)).toBe(true);
+    return (error as Error).message;
+  }
+  throw new Error('expected an input error');
+}
+
+describe('atomic output', () => {
+  it('ensureDirectory creates missing parents and refuses a path through a file, naming it', () => {
+    const root = scratch();
+    ensureDirectory(join(root, 'a/b/c'));
+    expect(existsSync(join(root, 'a/b/c'))).toBe(true);
+    writeFileSync(join(root, 'file'), 'x');
+    expect(inputErrorOf(() => ensureDirectory(join(root, 'file/sub')))).toContain('is not a folder');
+  });
+
+  it('writeFileAtomic leaves no temporary file behind and reports an unwritable path as an input error', () => {
+    const root = scratch();
+    writeFileAtomic(join(root, 'x/out.txt'), 'hello');
+    expect(readFileSync(join(root, 'x/out.txt'), 'utf8')).toBe('hello');
+    expect(readdirSync(join(root, 'x'))).toEqual(['out.txt']);
+    writeFileSync(join(root, 'blocker'), '');
+    expect(inputErrorOf(() => writeFileAtomic(join(root, 'blocker/out.txt'), 'x'))).toContain('blocker');
+  });
+
+  it('writeFolderAtomic replaces the whole folder, so no stale file of an earlier run survives', () => {
+    const root = scratch();
+    const target = join(root, 'result');
+    expect(writeFolderAtomic(target, new Map([['a.json', '1'], ['plots/b.svg', '<svg/>']])).replaced).toBe(false);
+    expect(writeFolderAtomic(target, new Map([['a.json', '2']])).replaced).toBe(true);
+    expect(readdirSync(target)).toEqual(['a.json']);
+    expect(readFileSync(join(target, 'a.json'), 'utf8')).toBe('2');
+    expect(readdirSync(root)).toEqual(['result']);
+  });
+
+  it('writeFolderAtomic keeps the earlier folder when the new set cannot be written', () => {
+    const root = scratch();
+    const target = join(root, 'result');
+    writeFolderAtomic(target, new Map([['a.json', 'old']]));
+    expect(() => writeFolderAtomic(target, new Map([['../escape.txt', 'x']]))).toThrow(RangeError);
+    expect(readFileSync(join(target, 'a.json'), 'utf8')).toBe('old');
+    expect(readdirSync(root)).toEqual(['result']);
+  });
+});
