@@ -78,6 +78,34 @@ export function gateCounts(circuit: Circuit): GateCounts {
   );
 }
 
+const totals = new WeakMap<Block, { body: number; compute: number; action: number }>();
+
+function opsTotal(ops: readonly UnitaryOp[]): number {
+  let total = 0;
+  for (const op of ops) total += op.kind === 'gate' ? 1 : callTotal(op.block, Math.abs(op.power));
+  return total;
+}
+
+function callTotal(block: Block, times: number): number {
+  if (times === 0) return 0;
+  let parts = totals.get(block);
+  if (!parts) {
+    const body = block.body;
+    parts = body.kind === 'plain' ? { body: opsTotal(body.ops), compute: 0, action: 0 } : { body: 0, compute: opsTotal(body.compute), action: opsTotal(body.action) };
+    totals.set(block, parts);
+  }
+  return block.body.kind === 'plain' ? times * parts.body : 2 * parts.compute + times * parts.action;
+}
+
+/**
+ * Number of primitive gates `circuit` expands to, as a float: exact below 2^53, approximate above,
+ * Infinity beyond the double range — for deciding whether a circuit is too large, where gateCounts
+ * would throw.
+ */
+export function expandedGateTotal(circuit: Circuit): number {
+  return opsTotal(circuit.ops.filter((op): op is UnitaryOp => op.kind === 'gate' || op.kind === 'call'));
+}
+
 /** Sum of all counts. */
 export function totalGates(counts: GateCounts): number {
   let total = 0;

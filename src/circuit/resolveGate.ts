@@ -2,15 +2,24 @@
  * resolveGate: turns a flat gate (name, parameters, modifiers) into what a simulator applies —
  * one target with a 2×2 unitary, a (powered) swap of two targets, or a phase — plus all controls.
  * Powers use the principal branch (eigenvalue arguments in (−π, π]), as OpenQASM 3 specifies.
+ * Integer powers are exact: reduced by the gate's order (x² = I, t⁸ = I), or by the exact angle
+ * k·θ modulo the period for rotation gates, or (any other unitary) computed from its rotation
+ * angles reduced exactly modulo 2π, so that huge exponents neither overflow nor drift.
  */
 import type { FlatGate } from './flatten.js';
-import { standardGate, type Matrix2 } from './standardGates.js';
+import { reduceAngle } from './internal/reduceAngle.js';
+import { standardGate, type Matrix2, type StandardGate } from './standardGates.js';
 
 export type ResolvedGate =
   | { readonly kind: 'unitary'; readonly target: number; readonly matrix: Matrix2; readonly controls: readonly number[]; readonly negControls: readonly number[] }
   /** Swap to the power: on span{|01>,|10>} of (a, b) the 2×2 [[(1+e)/2, (1−e)/2], [(1−e)/2, (1+e)/2]], e = phase. */
   | { readonly kind: 'swap'; readonly a: number; readonly b: number; readonly phaseRe: number; readonly phaseIm: number; readonly controls: readonly number[]; readonly negControls: readonly number[] }
   | { readonly kind: 'phase'; readonly angle: number; readonly controls: readonly number[]; readonly negControls: readonly number[] };
+
+/** Largest |k| of a gate power pow(k) @ g (integers beyond 2^53 are not all representable). */
+export const MAX_GATE_POWER = 2 ** 53;
+
+const IDENTITY: Matrix2 = [1, 0, 0, 0, 0, 0, 1, 0];
 
 /** Principal argument in (−π, π], treating a tiny negative imaginary part on the negative axis as +π. */
 function principalArg(re: number, im: number): number {
@@ -34,15 +43,50 @@ export function adjoint2(m: Matrix2): Matrix2 {
   return [m[0], -m[1], m[4], -m[5], m[2], -m[3], m[6], -m[7]];
 }
 
-/** Principal power of a 2×2 unitary: Σ λ^k P_λ over its eigenvalues. */
+/** m^r by repeated multiplication (r ≥ 0, small). */
+function repeat(m: Matrix2, r: number): Matrix2 {
+  let result = IDENTITY;
+  for (let j = 0; j < r; j++) result = multiply(result, m);
+  return result;
+}
+
+/**
+ * m^k for an integer k, m a 2×2 unitary written as e^{iα}(cos ω I + i sin ω n̂·σ) (α = arg(det m)/2):
+ * m^k = e^{ikα}(cos kω I + i sin kω n̂·σ), with kα and kω reduced exactly modulo 2π. The angles come
+ * from atan2 of the Pauli components, so nearly degenerate eigenvalues lose no accuracy.
+ */
+function integerUnitaryPower(m: Matrix2, k: number): Matrix2 {
+  if (Math.abs(k) <= 64) return repeat(k < 0 ? adjoint2(m) : m, Math.abs(k));
+  const [a0, a1, b0, b1, c0, c1, d0, d1] = m;
+  const alpha = Math.atan2(a0 * d1 + a1 * d0 - (b0 * c1 + b1 * c0), a0 * d0 - a1 * d1 - (b0 * c0 - b1 * c1)) / 2;
+  const [ca, sa] = [Math.cos(alpha), Math.sin(alpha)];
+  // N = e^{−iα} m = n0 I + i(n1 X + n2 Y + n3 Z).
+  const rot = (x: number, y: number): [number, number] => [x * ca + y * sa, y * ca - x * sa];
+  const [A0, A1] = rot(a0, a1);
+  const [B0, B1] = rot(b0, b1);
+  const [C0, C1] = rot(c0, c1);
+  const [D0, D1] = rot(d0, d1);
+  const n0 = (A0 + D0) / 2;
+  const n3 = (A1 - D1) / 2;
+  const n1 = (B1 + C1) / 2;
+  const n2 = (B0 - C0) / 2;
+  const size = Math.hypot(n1, n2, n3);
+  const omega = Math.atan2(size, n0);
+  const kOmega = reduceAngle(k, omega, 2);
+  const [cw, sw] = [Math.cos(kOmega), size === 0 ? 0 : Math.sin(kOmega) / size];
+  const kAlpha = reduceAngle(k, alpha, 2);
+  const [pc, ps] = [Math.cos(kAlpha), Math.sin(kAlpha)];
+  const phase = (x: number, y: number): [number, number] => [x * pc - y * ps, x * ps + y * pc];
+  return [
+    ...phase(cw, sw * n3), ...phase(sw * n2, sw * n1),
+    ...phase(-sw * n2, sw * n1), ...phase(cw, -sw * n3),
+  ] as unknown as Matrix2;
+}
+
+/** Principal power of a 2×2 unitary: Σ λ^k P_λ over its eigenvalues, arguments in (−π, π]; integer k exactly. */
 export function unitaryPower(m: Matrix2, k: number): Matrix2 {
   if (k === 1) return m;
-  if (Number.isInteger(k) && Math.abs(k) <= 64) {
-    let result: Matrix2 = [1, 0, 0, 0, 0, 0, 1, 0];
-    const base = k < 0 ? adjoint2(m) : m;
-    for (let r = 0; r < Math.abs(k); r++) result = multiply(result, base);
-    return result;
-  }
+  if (Number.isInteger(k)) return integerUnitaryPower(m, k);
   const [a0, a1, b0, b1, c0, c1, d0, d1] = m;
   // Eigenvalues of [[a, b], [c, d]]: (tr ± √(tr² − 4 det)) / 2.
   const tr0 = a0 + d0;
@@ -91,6 +135,16 @@ export function unitaryPower(m: Matrix2, k: number): Matrix2 {
   return out as unknown as Matrix2;
 }
 
+/** g^k for an integer k: by the gate's order, its rotation angle, or its eigenphases. */
+function integerPower(definition: StandardGate, params: readonly number[], base: Matrix2, k: number): Matrix2 {
+  if (definition.order !== undefined) {
+    const r = ((k % definition.order) + definition.order) % definition.order;
+    return repeat(base, r);
+  }
+  if (definition.integerPower !== undefined) return definition.integerPower(params, k);
+  return unitaryPower(base, k);
+}
+
 /** The simulator-level action of a flat gate. */
 export function resolveGate(g: FlatGate): ResolvedGate {
   const definition = standardGate(g.name);
@@ -100,17 +154,23 @@ export function resolveGate(g: FlatGate): ResolvedGate {
   const controls = [...g.controls, ...builtIn];
   const negControls = g.negControls;
   const exponent = g.inverse ? -g.power : g.power;
+  if (!(Math.abs(exponent) <= MAX_GATE_POWER)) throw new RangeError(`gate ${g.name}: power ${g.power} is not a number of magnitude at most 2^53`);
+  const integer = Number.isInteger(exponent);
   const base = definition.base(g.params);
   if (base.kind === 'phase') {
-    const angle = exponent * (Number.isInteger(exponent) ? base.angle : principalArg(Math.cos(base.angle), Math.sin(base.angle)));
+    const angle =
+      exponent === 1 || exponent === -1 ? exponent * base.angle
+      : integer ? reduceAngle(exponent, base.angle, 2)
+      : exponent * principalArg(Math.cos(base.angle), Math.sin(base.angle));
     return { kind: 'phase', angle, controls, negControls };
   }
   if (base.kind === 'swap') {
     // Swap has eigenvalues +1 (symmetric) and −1 (antisymmetric); (−1)^k = e^{iπk} on the principal branch.
     // Integer powers are exact (sin(πk) is not exactly 0 in floating point).
     const odd = Math.abs(exponent) % 2 === 1;
-    const [phaseRe, phaseIm] = Number.isInteger(exponent) ? [odd ? -1 : 1, 0] : [Math.cos(Math.PI * exponent), Math.sin(Math.PI * exponent)];
+    const [phaseRe, phaseIm] = integer ? [odd ? -1 : 1, 0] : [Math.cos(Math.PI * exponent), Math.sin(Math.PI * exponent)];
     return { kind: 'swap', a: operands[0] as number, b: operands[1] as number, phaseRe, phaseIm, controls, negControls };
   }
-  return { kind: 'unitary', target: operands[0] as number, matrix: unitaryPower(base.matrix, exponent), controls, negControls };
+  const matrix = integer && exponent !== 1 ? (exponent === -1 ? adjoint2(base.matrix) : integerPower(definition, g.params, base.matrix, exponent)) : unitaryPower(base.matrix, exponent);
+  return { kind: 'unitary', target: operands[0] as number, matrix, controls, negControls };
 }

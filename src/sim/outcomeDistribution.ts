@@ -11,7 +11,7 @@ import { directOutcomes } from './internal/directOutcomes.js';
 import { measurementPlan } from './internal/measurementPlan.js';
 
 export interface OutcomeOptions extends SimulationOptions {
-  /** Most live measurement branches allowed (default 4096). */
+  /** Most measurement branches exact enumeration may follow (default 4096). */
   readonly maxBranches?: number;
 }
 
@@ -22,8 +22,10 @@ export const DEFAULT_MAX_BRANCHES = 4096;
  * Exact outcome distribution of `circuit` run from |0…0>. Classical bit k is bit k of the outcome
  * (keys written most-significant first); a bit never measured stays 0; a reset is a measurement
  * whose result is dropped, followed by a flip to |0> when it was 1. Outcomes of probability below
- * NEGLIGIBLE_PROBABILITY are left out. Throws InputError (a TooManyBranchesError) when more than
- * `maxBranches` branches would be live, or when a state does not fit in memory.
+ * NEGLIGIBLE_PROBABILITY are left out. Throws InputError (a TooManyBranchesError) before simulating
+ * when the mid-circuit measurements and resets may give more branches than allowed (`maxBranches`,
+ * at most 2^26 amplitudes in all branch states, the planned memory limit), or when a state does not
+ * fit in memory.
  */
 export function outcomeDistribution(circuit: Circuit, options: OutcomeOptions = {}): OutcomeDistribution {
   const qubits = qubitCount(circuit);
@@ -31,6 +33,6 @@ export function outcomeDistribution(circuit: Circuit, options: OutcomeOptions = 
   const plan = measurementPlan(circuit, bits);
   const raw = plan.direct
     ? directOutcomes(circuit, qubits, plan.bitSources, options)
-    : branchOutcomes(circuit, qubits, bits, options.maxBranches ?? DEFAULT_MAX_BRANCHES, options);
+    : branchOutcomes(circuit, qubits, bits, plan.splits, options.maxBranches ?? DEFAULT_MAX_BRANCHES, options);
   return { qubits, bits, outcomes: sortedOutcomes(raw, NEGLIGIBLE_PROBABILITY) };
 }

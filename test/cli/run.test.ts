@@ -102,7 +102,8 @@ describe('polewright run exit codes', () => {
   const main = join(import.meta.dirname, '../../src/cli/main.ts');
   async function exit(...args: string[]): Promise<{ code: number; stderr: string }> {
     try {
-      await run(process.execPath, ['--import', 'tsx', main, 'run', ...args]);
+      // A small memory limit keeps any accidental allocation small (the refusals below come before it).
+      await run(process.execPath, ['--import', 'tsx', main, 'run', ...args], { env: { ...process.env, POLEWRIGHT_MEMORY_LIMIT: String(64 * 2 ** 20) } });
       return { code: 0, stderr: '' };
     } catch (error) {
       const e = error as { code: number; stderr: string };
@@ -120,4 +121,31 @@ describe('polewright run exit codes', () => {
     expect(shots.code).toBe(2);
     expect(shots.stderr).toMatch(/--shots/);
   }, 30000);
+
+  it('exits 2 naming the line for deep gate nesting, an absurd pow, too many gates and too many measurement branches', async () => {
+    const lines = (...body: string[]): string => ['OPENQASM 3;', 'include "stdgates.inc";', ...body].join('\n') + '\n';
+    const chain = (levels: number, calls: number): string[] =>
+      Array.from({ length: levels }, (_, k) => `gate g${k + 1} a { ${Array.from({ length: calls }, () => `g${k} a;`).join(' ')} }`);
+    const deep = file('deep.qasm', lines('gate g0 a { x a; }', ...chain(300, 1), 'qubit q;', 'g300 q;'));
+    const huge = file('huge.qasm', lines('gate g0 a { x a; }', ...chain(40, 2), 'qubit q;', 'g40 q;'));
+    const power = file('power.qasm', lines('qubit[1] q;', 'pow(-1e308) @ h q[0];'));
+    const branches = file('branches.qasm', lines('qubit[20] q;', 'bit[20] c;', 'h q;', ...Array.from({ length: 20 }, (_, k) => `c[${k}] = measure q[${k}]; reset q[${k}];`)));
+    const results = await Promise.all([exit(deep), exit(huge), exit(power), exit(branches)]);
+    results.forEach((r) => {
+      expect(r.code).toBe(2);
+      expect(r.stderr.trim().split('\n')).toHaveLength(1);
+    });
+    const [d, h, p, b] = results.map((r) => r.stderr);
+    expect(d).toMatch(/deep\.qasm:259:\d+: gate 'g256' nests gate definitions 257 levels deep/);
+    expect(h).toMatch(/huge\.qasm: the program expands to 1\.10e\+12 gates; run simulates at most 2\^30/);
+    expect(p).toMatch(/power\.qasm:4:\d+: the exponent of pow must have magnitude at most 2\^53/);
+    expect(b).toMatch(/2\^20 branches.*--shots/);
+  }, 60000);
+});
+
+describe('polewright run and OpenQASM 3.0.0 phases', () => {
+  it('h; ctrl @ U(2π, 0, 0); h gives 0 with certainty (U(2π, 0, 0) = I in 3.0.0, "Built-in gates")', async () => {
+    const program = file('ctrl-u.qasm', 'OPENQASM 3;\ninclude "stdgates.inc";\nqubit[2] q;\nbit[1] c;\nh q[0];\nctrl @ U(2*pi,0,0) q[0],q[1];\nh q[0];\nc[0] = measure q[0];\n');
+    expect(printedKeys(await output(program, '--json'))).toEqual(['0']);
+  });
 });

@@ -63,11 +63,9 @@ describe('parseQasm errors', () => {
     });
   }
 
-  it('refuses 100,000 nested parentheses quickly with a QasmParseError', () => {
-    const start = performance.now();
+  it('refuses 100,000 nested parentheses with a QasmParseError', () => {
     const error = errorOf(`${HEADER}qubit q;\nrz(${'('.repeat(100_000)}1${')'.repeat(100_000)}) q;`);
     expect(error.message).toMatch(/nested more than 200 levels deep/);
-    expect(performance.now() - start).toBeLessThan(2000);
   });
 
   it('refuses 100,000 nested unary minus signs with a QasmParseError', () => {

@@ -1,6 +1,6 @@
 // parseQasm robustness: thousands of mutated valid programs (tokens deleted, duplicated, swapped;
 // random characters inserted or replaced; truncation) and random text each give a Circuit or a
-// QasmParseError with a sane position — nothing else — and quickly.
+// QasmParseError with a sane position — nothing else (timings: scripts/bench-robustness.ts).
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
@@ -77,10 +77,8 @@ describe('parseQasm on malformed input', () => {
     for (const seed of SEEDS) expect(parseQasm(seed, 'seed.qasm').ops.length).toBeGreaterThan(0);
   });
 
-  it('gives a Circuit or a QasmParseError for 2,500 mutated programs, fast', () => {
-    const start = performance.now();
+  it('gives a Circuit or a QasmParseError for 2,500 mutated programs', () => {
     fc.assert(fc.property(mutatedProgram, expectCircuitOrParseError), { numRuns: 2500 });
-    expect(performance.now() - start).toBeLessThan(15_000);
   });
 
   it('gives a Circuit or a QasmParseError for 500 random strings', () => {

@@ -69,10 +69,12 @@ describe('textbook examples in circuits/', () => {
  * the amplitude of basis index i is ψ_{bit 2 of i} / 2.
  */
 function expectTeleported(circuit: Circuit, [theta, phi]: readonly number[]): void {
-  // U(θ, φ, λ)|0> = cos(θ/2)|0> + e^{iφ} sin(θ/2)|1>: the first column of U in the OpenQASM 3
-  // specification (λ only enters the second column).
+  // U(θ, φ, λ)|0> = e^{iθ/2}(cos(θ/2)|0> + e^{iφ} sin(θ/2)|1>): the first column of U in the OpenQASM 3.0.0
+  // specification, "Built-in gates" (½(1 + e^{iθ}) and ½ie^{iφ}(1 − e^{iθ}); λ only enters the second column).
   const s = Math.sin(theta! / 2);
-  const psi: [number, number][] = [[Math.cos(theta! / 2), 0], [Math.cos(phi!) * s, Math.sin(phi!) * s]];
+  const c = Math.cos(theta! / 2);
+  const [gr, gi] = [Math.cos(theta! / 2), Math.sin(theta! / 2)];
+  const psi: [number, number][] = [[c * gr, c * gi], [s * Math.cos(phi! + theta! / 2), s * Math.sin(phi! + theta! / 2)]];
   const state = simulateState(unitaryPart(circuit));
   for (let i = 0; i < 8; i++) {
     const amplitude = psi[(i >> 2) & 1]!;

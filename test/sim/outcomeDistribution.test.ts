@@ -5,6 +5,7 @@ import { CircuitBuilder } from '../../src/circuit/CircuitBuilder.js';
 import { gate } from '../../src/circuit/ops.js';
 import { InputError } from '../../src/core/InputError.js';
 import { outcomeDistribution } from '../../src/sim/outcomeDistribution.js';
+import { isTooManyBranchesError } from '../../src/sim/internal/TooManyBranchesError.js';
 import { expectClose } from '../helpers/close.js';
 
 function expectOutcomes(actual: ReadonlyMap<string, number>, expected: Record<string, number>): void {
@@ -86,6 +87,49 @@ describe('outcomeDistribution(circuit)', () => {
     expect(() => outcomeDistribution(circuit, { maxBranches: 4 })).toThrow(InputError);
     expect(() => outcomeDistribution(circuit, { maxBranches: 4 })).toThrow(/--shots/);
     expect(outcomeDistribution(circuit, { maxBranches: 8 }).outcomes.size).toBe(8);
+  });
+
+  /** h on every qubit, then measure and reset each qubit in turn (a reset right after a measurement does not split). */
+  function measureAndResetAll(qubits: number): ReturnType<CircuitBuilder['build']> {
+    const b = new CircuitBuilder();
+    b.qubits('q', qubits);
+    b.bits('c', qubits);
+    for (let q = 0; q < qubits; q++) b.add(gate('h', [q]));
+    for (let q = 0; q < qubits; q++) b.measure(q, q).add({ kind: 'reset', qubit: q });
+    return b.build();
+  }
+
+  function thrown(run: () => unknown): Error {
+    try {
+      run();
+    } catch (error) {
+      return error as Error;
+    }
+    return expect.fail('expected an error');
+  }
+
+  it('counts measure-then-reset as one split: 4 qubits give exactly 16 branches, allowed at maxBranches 16, refused at 8', () => {
+    const circuit = measureAndResetAll(4);
+    const outcomes = outcomeDistribution(circuit, { maxBranches: 16 }).outcomes;
+    expect(outcomes.size).toBe(16);
+    for (const p of outcomes.values()) expectClose(p, 1 / 16, 1e-14, 'uniform');
+    expect(isTooManyBranchesError(thrown(() => outcomeDistribution(circuit, { maxBranches: 8 })))).toBe(true);
+  });
+
+  it('refuses 20 qubits with a measurement and reset on every qubit from the plan, before any branch state is copied', () => {
+    // 2^20 branches of 2^20 amplitudes: the plan bound exceeds the 2^26-amplitude budget (64 states of 20 qubits).
+    // A memory limit that holds only the initial state shows that no copy was attempted.
+    const error = thrown(() => outcomeDistribution(measureAndResetAll(20), { memoryLimitBytes: 17 * 2 ** 20 }));
+    expect(isTooManyBranchesError(error)).toBe(true);
+    expect(error.message).toMatch(/2\^20 branches/);
+    expect(error.message).toMatch(/--shots/);
+  });
+
+  it('caps branches by the memory limit: 16 qubits under an 8 MiB limit allow 7 states, and the message says so', () => {
+    const error = thrown(() => outcomeDistribution(measureAndResetAll(16), { memoryLimitBytes: 8 * 2 ** 20 }));
+    expect(error).toBeInstanceOf(InputError);
+    expect(error.message).toMatch(/at most 7 measurement branches/);
+    expect(error.message).toMatch(/8\.00 MiB memory limit/);
   });
 
   it('a circuit without classical bits has the single empty outcome', () => {

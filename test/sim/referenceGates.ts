@@ -1,5 +1,6 @@
 // Matrices of the OpenQASM 3 standard gates written independently of src/, with mathjs, from the
-// OpenQASM 3.0 specification (the U(θ,φ,λ) definition and stdgates.inc — from memory).
+// OpenQASM 3.0.0 specification: U(θ,φ,λ) as defined in the "Gates" chapter, section "Built-in gates",
+// and the stdgates.inc bodies of 3.0.0 (looked up, not from memory), global phases included.
 import * as math from 'mathjs';
 import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 
@@ -11,14 +12,25 @@ const I2 = mat([[c(1), c(0)], [c(0), c(1)]]);
 const P0 = mat([[c(1), c(0)], [c(0), c(0)]]);
 const P1 = mat([[c(0), c(0)], [c(0), c(1)]]);
 
-/** Spec: U(θ,φ,λ) = [[cos θ/2, −e^{iλ} sin θ/2], [e^{iφ} sin θ/2, e^{i(φ+λ)} cos θ/2]]. */
+/**
+ * OpenQASM 3.0.0, "Gates" chapter, section "Built-in gates":
+ * U(θ,φ,λ) := ½[[1+e^{iθ}, −ie^{iλ}(1−e^{iθ})], [ie^{iφ}(1−e^{iθ}), e^{i(φ+λ)}(1+e^{iθ})]]
+ * (= e^{iθ/2}·[[cos θ/2, −e^{iλ} sin θ/2], [e^{iφ} sin θ/2, e^{i(φ+λ)} cos θ/2]]; earlier drafts had no e^{iθ/2}).
+ */
 export function U(theta: number, phi: number, lambda: number): M {
-  const co = Math.cos(theta / 2);
-  const si = Math.sin(theta / 2);
+  const e = cis(theta);
+  const plus = math.add(c(1), e) as math.Complex;
+  const minus = math.subtract(c(1), e) as math.Complex;
+  const half = (z: math.Complex): math.Complex => math.multiply(z, 0.5) as math.Complex;
   return mat([
-    [c(co), math.multiply(cis(lambda), -si) as math.Complex],
-    [math.multiply(cis(phi), si) as math.Complex, math.multiply(cis(phi + lambda), co) as math.Complex],
+    [half(plus), half(math.multiply(math.multiply(c(0, -1), cis(lambda)), minus) as math.Complex)],
+    [half(math.multiply(math.multiply(c(0, 1), cis(phi)), minus) as math.Complex), half(math.multiply(cis(phi + lambda), plus) as math.Complex)],
   ]);
+}
+
+/** gphase(γ) in a gate body: the body's matrix times e^{iγ} (same section, "gphase"). */
+export function gphased(gamma: number, m: M): M {
+  return scaled(cis(gamma), m);
 }
 
 export function scaled(factor: math.Complex, m: M): M {
@@ -42,10 +54,14 @@ export function negControlled(g: M): M {
 }
 
 const p = (lambda: number): M => mat([[c(1), c(0)], [c(0), cis(lambda)]]);
-const x = U(Math.PI, 0, Math.PI);
-const rx = (t: number): M => U(t, -Math.PI / 2, Math.PI / 2);
-const ry = (t: number): M => U(t, 0, 0);
-const rz = (l: number): M => scaled(cis(-l / 2), U(0, 0, l));
+// stdgates.inc (3.0.0): x = U(π, 0, π); gphase(−π/2), y = U(π, π/2, π/2); gphase(−π/2), h = U(π/2, 0, π); gphase(−π/4),
+// rx(θ) = U(θ, −π/2, π/2); gphase(−θ/2), ry(θ) = U(θ, 0, 0); gphase(−θ/2), rz(λ) = gphase(−λ/2); U(0, 0, λ).
+const x = gphased(-Math.PI / 2, U(Math.PI, 0, Math.PI));
+const y = gphased(-Math.PI / 2, U(Math.PI, Math.PI / 2, Math.PI / 2));
+const h = gphased(-Math.PI / 4, U(Math.PI / 2, 0, Math.PI));
+const rx = (t: number): M => gphased(-t / 2, U(t, -Math.PI / 2, Math.PI / 2));
+const ry = (t: number): M => gphased(-t / 2, U(t, 0, 0));
+const rz = (l: number): M => gphased(-l / 2, U(0, 0, l));
 const swap = mat([
   [c(1), c(0), c(0), c(0)],
   [c(0), c(0), c(1), c(0)],
@@ -63,41 +79,45 @@ export interface ReferenceGate {
 const g = (params: number, qubits: number, matrix: (a: readonly number[]) => M): ReferenceGate => ({ params, qubits, matrix });
 const a0 = (a: readonly number[]): number => a[0] as number;
 
-// Each line follows the gate's stdgates.inc definition (from memory); comments give the definition.
+// Each line follows the gate's stdgates.inc (3.0.0) definition; comments give the definition.
 export const REFERENCE_GATES: Readonly<Record<string, ReferenceGate>> = {
   U: g(3, 1, (a) => U(a0(a), a[1] as number, a[2] as number)),
   gphase: g(1, 0, (a) => mat([[cis(a0(a))]])),
   p: g(1, 1, (a) => p(a0(a))), // ctrl @ gphase(λ)
-  x: g(0, 1, () => x), // U(π, 0, π)
-  y: g(0, 1, () => U(Math.PI, Math.PI / 2, Math.PI / 2)), // U(π, π/2, π/2)
+  x: g(0, 1, () => x), // U(π, 0, π); gphase(−π/2)
+  y: g(0, 1, () => y), // U(π, π/2, π/2); gphase(−π/2)
   z: g(0, 1, () => p(Math.PI)), // p(π)
-  h: g(0, 1, () => U(Math.PI / 2, 0, Math.PI)), // U(π/2, 0, π)
+  h: g(0, 1, () => h), // U(π/2, 0, π); gphase(−π/4)
   s: g(0, 1, () => mat([[c(1), c(0)], [c(0), c(0, 1)]])), // pow(1/2) @ z
   sdg: g(0, 1, () => mat([[c(1), c(0)], [c(0), c(0, -1)]])), // inv @ pow(1/2) @ z
   t: g(0, 1, () => p(Math.PI / 4)), // pow(1/2) @ s
   tdg: g(0, 1, () => p(-Math.PI / 4)), // inv @ pow(1/2) @ s
   sx: g(0, 1, () => mat([[c(0.5, 0.5), c(0.5, -0.5)], [c(0.5, -0.5), c(0.5, 0.5)]])), // pow(1/2) @ x
-  rx: g(1, 1, (a) => rx(a0(a))), // U(θ, −π/2, π/2)
-  ry: g(1, 1, (a) => ry(a0(a))), // U(θ, 0, 0)
+  rx: g(1, 1, (a) => rx(a0(a))), // U(θ, −π/2, π/2); gphase(−θ/2)
+  ry: g(1, 1, (a) => ry(a0(a))), // U(θ, 0, 0); gphase(−θ/2)
   rz: g(1, 1, (a) => rz(a0(a))), // gphase(−λ/2); U(0, 0, λ)
   cx: g(0, 2, () => controlled(x)),
-  cy: g(0, 2, () => controlled(U(Math.PI, Math.PI / 2, Math.PI / 2))),
+  cy: g(0, 2, () => controlled(y)),
   cz: g(0, 2, () => controlled(p(Math.PI))),
   cp: g(1, 2, (a) => controlled(p(a0(a)))),
   crx: g(1, 2, (a) => controlled(rx(a0(a)))),
   cry: g(1, 2, (a) => controlled(ry(a0(a)))),
   crz: g(1, 2, (a) => controlled(rz(a0(a)))),
-  ch: g(0, 2, () => controlled(U(Math.PI / 2, 0, Math.PI))),
+  ch: g(0, 2, () => controlled(h)),
   swap: g(0, 2, () => swap), // cx a,b; cx b,a; cx a,b — the permutation |01> ↔ |10>
   ccx: g(0, 3, () => controlled(controlled(x))),
   cswap: g(0, 3, () => controlled(swap)),
-  // p(γ) c; ctrl @ U(θ, φ, λ) c, t — applied right to left as matrices.
-  cu: g(4, 2, (a) => math.multiply(controlled(U(a0(a), a[1] as number, a[2] as number)), math.kron(I2, p(a[3] as number))) as M),
-  CX: g(0, 2, () => controlled(U(Math.PI, 0, Math.PI))), // ctrl @ U(π, 0, π)
+  // p(γ − θ/2) c; ctrl @ U(θ, φ, λ) c, t — applied right to left as matrices.
+  cu: g(4, 2, (a) => math.multiply(controlled(U(a0(a), a[1] as number, a[2] as number)), math.kron(I2, p((a[3] as number) - a0(a) / 2))) as M),
+  // The CNOT: "Built-in gates" defines CX as ctrl @ X with X = U(π, 0, π); gphase(−π/2), and the standard-library
+  // page calls CX an alias of cx. (The 3.0.0 stdgates.inc body ctrl @ U(π, 0, π) predates the e^{iθ/2} in U.)
+  CX: g(0, 2, () => controlled(x)),
   phase: g(1, 1, (a) => U(0, 0, a0(a))), // U(0, 0, λ)
   cphase: g(1, 2, (a) => controlled(U(0, 0, a0(a)))), // ctrl @ phase(λ)
   id: g(0, 1, () => U(0, 0, 0)), // U(0, 0, 0)
   u1: g(1, 1, (a) => U(0, 0, a0(a))), // U(0, 0, λ)
+  u2: g(2, 1, (a) => gphased(-(a0(a) + (a[1] as number) + Math.PI / 2) / 2, U(Math.PI / 2, a0(a), a[1] as number))), // gphase(−(φ+λ+π/2)/2); U(π/2, φ, λ)
+  u3: g(3, 1, (a) => gphased(-(a0(a) + (a[1] as number) + (a[2] as number)) / 2, U(a0(a), a[1] as number, a[2] as number))), // gphase(−(φ+λ+θ)/2); U(θ, φ, λ)
 };
 
 /** A mathjs complex matrix as a ComplexMatrix (row-major Float64Arrays). */

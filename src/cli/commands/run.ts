@@ -4,6 +4,7 @@
  */
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
+import { expandedGateTotal } from '../../circuit/gateCounts.js';
 import type { Circuit } from '../../circuit/types.js';
 import { InputError } from '../../core/InputError.js';
 import { parseQasm } from '../../qasm/parseQasm.js';
@@ -14,6 +15,9 @@ import { parseNonNegativeInteger, parsePositiveInteger } from '../options.js';
 
 /** Seed of the shot sampler when --seed is not given. */
 export const DEFAULT_SEED = 1;
+
+/** Most primitive gates a program may expand to (gate definitions and pow of user gates multiply them). */
+export const MAX_RUN_GATES = 2 ** 30;
 
 interface RunOptions {
   readonly shots?: string;
@@ -28,6 +32,14 @@ function readSource(file: string): string {
     const code = (error as NodeJS.ErrnoException).code;
     const reason = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a directory' : (error as Error).message;
     throw new InputError(`cannot read "${file}": ${reason}`);
+  }
+}
+
+/** Refuses a program whose gate definitions expand to more gates than the simulator can apply in reasonable time. */
+function checkSize(file: string, circuit: Circuit): void {
+  const total = expandedGateTotal(circuit);
+  if (total > MAX_RUN_GATES) {
+    throw new InputError(`${file}: the program expands to ${total.toPrecision(3)} gates; run simulates at most 2^30 (${MAX_RUN_GATES}) gates`);
   }
 }
 
@@ -82,6 +94,7 @@ export function registerRunCommand(program: Command): void {
       const shots = options.shots === undefined ? undefined : parsePositiveInteger('--shots', options.shots);
       const seed = parseSeed(options.seed);
       const circuit = parseQasm(readSource(file), file);
+      checkSize(file, circuit);
       const result = shots === undefined ? outcomeDistribution(circuit) : sampleCircuitOutcomes(circuit, shots, seed);
       process.stdout.write(options.json ? formatJson(result) : formatTable(file, circuit, result, shots, seed));
     });

@@ -12,6 +12,8 @@ import { KEYWORDS } from './keywords.js';
 
 /** Most qubits (and, separately, bits) a program may declare in total. */
 export const MAX_DECLARED = 1 << 16;
+/** Deepest nesting of gate definitions (a gate whose body calls only standard gates has depth 1). */
+export const MAX_GATE_NESTING = 256;
 
 const BUILT_IN = new Set(['U', 'gphase']);
 const NOT_A_NAME: ReadonlySet<string> = new Set([...KEYWORDS, 'π', 'τ', 'ℇ']);
@@ -23,6 +25,8 @@ type Symbol =
 export class CircuitAssembler {
   private readonly builder = new CircuitBuilder();
   private readonly symbols = new Map<string, Symbol>();
+  /** Nesting depth of each defined gate. */
+  private readonly nesting = new Map<Block, number>();
   private included = false;
   private statements = 0;
   private qubits = 0;
@@ -118,7 +122,12 @@ export class CircuitAssembler {
       },
     };
     const ops: UnitaryOp[] = statement.body.flatMap((call) => resolveGateCall(call, scope));
+    const depth = 1 + ops.reduce((deepest, op) => Math.max(deepest, op.kind === 'call' ? (this.nesting.get(op.block) as number) : 0), 0);
+    if (depth > MAX_GATE_NESTING) {
+      fail(name.position, `gate definitions nested at most ${MAX_GATE_NESTING} deep`, `gate '${name.name}' nests gate definitions ${depth} levels deep; at most ${MAX_GATE_NESTING} are supported`);
+    }
     const block = defineBlock({ name: name.name, role: roleOf(statement.comment, name.name), qubits: locals.size, params: [...params.keys()] }, ops);
+    this.nesting.set(block, depth);
     this.symbols.set(name.name, { kind: 'gate', block });
   }
 

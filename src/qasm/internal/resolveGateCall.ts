@@ -1,6 +1,7 @@
 // Resolves one parsed gate call into IR operations: looks the gate up, evaluates its arguments,
 // reduces the modifier chain to controls / negControls / inverse / power, and broadcasts over registers.
 import type { Angle } from '../../circuit/angle.js';
+import { MAX_GATE_POWER } from '../../circuit/resolveGate.js';
 import type { StandardGate } from '../../circuit/standardGates.js';
 import type { Block, UnitaryOp } from '../../circuit/types.js';
 import { constantValue, expressionToAngle, integerValue } from './expressionToAngle.js';
@@ -40,6 +41,9 @@ function reduceExponent(call: GateCall, target: GateTarget, scope: CallScope): {
     if (m.kind === 'inv') inverse = !inverse;
     if (m.kind !== 'pow') continue;
     const exponent = constantValue(m.exponent, 'the exponent of pow', scope.params);
+    if (!(Math.abs(exponent) <= MAX_GATE_POWER)) {
+      fail(m.exponent.position, 'an exponent of magnitude at most 2^53', `the exponent of pow must have magnitude at most 2^53, got ${exponent}`);
+    }
     if (Number.isInteger(exponent)) {
       // An integer power of any matrix power is exact: (g^p)^k = g^(pk).
       power *= exponent;
@@ -61,7 +65,9 @@ function reduceExponent(call: GateCall, target: GateTarget, scope: CallScope): {
       );
     }
   }
-  if (!Number.isFinite(power)) fail(call.position, 'a finite combined power', 'the combined power of the modifiers is not finite');
+  if (!(Math.abs(power) <= MAX_GATE_POWER)) {
+    fail(call.position, 'a combined power of magnitude at most 2^53', `the combined power of the pow modifiers must have magnitude at most 2^53, got ${power}`);
+  }
   return { inverse, power };
 }
 

@@ -5,8 +5,12 @@
 import { InputError } from '../../core/InputError.js';
 
 export class TooManyBranchesError extends InputError {
-  constructor(limit: number) {
-    super(`the circuit's mid-circuit measurements and resets give more than ${limit} branches; sample it with shots instead (polewright run --shots N)`);
+  /** `reason` says why: how many branches may arise and what sets the limit. */
+  constructor(limit: number, reason: string) {
+    super(
+      `exact outcome enumeration follows at most ${limit} measurement branches (${reason}); ` +
+        'sample the circuit with shots instead (polewright run --shots N)',
+    );
   }
 }
 
