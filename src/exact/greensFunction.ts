@@ -3,12 +3,14 @@
  * averaged over the degenerate ground level. Diagonal entries are Lanczos continued fractions seeded
  * with a_j†|ψ0⟩ (N+1) and a_i|ψ0⟩ (N−1); off-diagonal ones follow from the polarisation identity
  * ⟨u|R|v⟩ = ½[⟨u+v|R|u+v⟩ − i⟨u+iv|R|u+iv⟩ − (1−i)(⟨u|R|u⟩ + ⟨v|R|v⟩)], valid for complex H.
+ * The level's states may lie in several S_z sectors (GroundLevel.components); all count equally.
+ * Each value carries a rigorous bound on its continued-fraction truncation error (truncationBound).
  */
 import type { FermionModel } from '../model/FermionModel.js';
 import { applyLadder } from './applyLadder.js';
 import { fockSector, type FockSector, type SectorSpec } from './fockSector.js';
-import { KEEP_BASIS_DIMENSION, type GroundLevel } from './groundLevel.js';
-import { continuedFraction, evaluateFraction, type ContinuedFraction } from './internal/continuedFraction.js';
+import { KEEP_BASIS_DIMENSION, type GroundComponent, type GroundLevel } from './groundLevel.js';
+import { continuedFraction, evaluateFraction, truncationBound, type ContinuedFraction } from './internal/continuedFraction.js';
 import { lanczos } from './internal/lanczos.js';
 import { countedProducts } from './internal/countedProducts.js';
 import { shiftedSpec } from './internal/modelSectors.js';
@@ -28,10 +30,9 @@ export interface GreenOptions {
   /** [i, j] entries to compute; default all n² in row-major order. */
   readonly pairs?: readonly (readonly [number, number])[];
   /**
-   * Continued fractions stop when CHECK_EVERY more levels change no value on the z list by more than
-   * this, relative to the largest |value| there. Default 1e-6 (a thousandth of a percent of the
-   * peak; the change tracks the remaining error within a factor ~2). Small sectors exhaust their
-   * Krylov space first and are exact whatever the tolerance.
+   * Continued fractions stop (checked every CHECK_EVERY levels) when the rigorous truncation bound
+   * (truncationBound) at every z of the list is at most this times the largest |value| there. Default
+   * 1e-6. Small sectors close their Krylov space first and are exact whatever the tolerance.
    */
   readonly tolerance?: number;
   /** Lanczos steps per continued fraction at most. Default 3000. */
@@ -54,9 +55,14 @@ export interface GreenEntry {
   readonly im: Float64Array;
 }
 
+/** A GreenEntry with, per z, a rigorous bound on |G_ij − value| from cutting the continued fractions. */
+export interface BoundedGreenEntry extends GreenEntry {
+  readonly bound: Float64Array;
+}
+
 export interface GreensFunction {
   readonly z: readonly Complex[];
-  readonly entries: readonly GreenEntry[];
+  readonly entries: readonly BoundedGreenEntry[];
   /** Products with H used by all continued fractions. */
   readonly applications: number;
 }
@@ -64,6 +70,12 @@ export interface GreensFunction {
 interface Values {
   re: Float64Array;
   im: Float64Array;
+  /** Bound on the truncation error of each value. */
+  bound: Float64Array;
+}
+
+function zeroValues(nz: number): Values {
+  return { re: new Float64Array(nz), im: new Float64Array(nz), bound: new Float64Array(nz) };
 }
 
 /** Every (i, j) of an n×n matrix, row-major. */
@@ -84,9 +96,8 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
   const tol = options.tolerance ?? DEFAULT_GREEN_TOLERANCE;
   const maxSteps = options.maxSteps ?? 3000;
   const e0 = ground.energy;
-  const real = ground.hamiltonian.real && ground.states.every((s) => s.im === null);
-  const spec = ground.sector.spec;
-  const spinSector = spec.lowCounts.length < spec.lowModes + 1;
+  const components = ground.components;
+  const real = components.every((c) => c.hamiltonian.real && c.states.every((s) => s.im === null));
   const sectors = new Map<string, { sector: FockSector; hamiltonian: SectorHamiltonian }>();
   let applications = 0;
 
@@ -105,23 +116,26 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
     return entry;
   }
 
-  /** ⟨φ|(z − s(H − E0))⁻¹|φ⟩ at every z for φ = Σ c·(a_m† or a_m)ψ. */
-  function fraction(particle: boolean, psi: CVec, combo: readonly (readonly [number, number, number])[]): Values {
-    const out = { re: new Float64Array(nz), im: new Float64Array(nz) };
+  /** ⟨φ|(z − s(H − E0))⁻¹|φ⟩ at every z for φ = Σ c·(a_m† or a_m)ψ, ψ in `from`. */
+  function fraction(from: FockSector, particle: boolean, psi: CVec, combo: readonly (readonly [number, number, number])[]): Values {
+    const out = zeroValues(nz);
     const delta = particle ? 1 : -1;
-    const target = sectorOf(shiftedSpec(spec, delta, combo.map((c) => c[0])));
+    const target = sectorOf(shiftedSpec(from.spec, delta, combo.map((c) => c[0])));
     if (target === null) return out;
     const complex = !real || combo.some((c) => c[2] !== 0);
     const seed = zeroVec(target.sector.dimension, complex);
-    for (const [m, cr, ci] of combo) applyLadder(ground.sector, target.sector, m, particle, psi, cr, ci, seed);
+    for (const [m, cr, ci] of combo) applyLadder(from, target.sector, m, particle, psi, cr, ci, seed);
     const weight = dot(seed, seed)[0];
     if (!(weight > 0)) return out;
     scale(1 / Math.sqrt(weight), seed);
     const dim = target.sector.dimension;
-    let previous: Values | null = null;
-    const evaluate = (cf: ContinuedFraction): Values => {
-      const v = { re: new Float64Array(nz), im: new Float64Array(nz) };
-      for (let k = 0; k < nz; k++) [v.re[k], v.im[k]] = evaluateFraction(cf, options.z[k]!.re, options.z[k]!.im);
+    const evaluate = (cf: ContinuedFraction, withBound: boolean): Values => {
+      const v = zeroValues(nz);
+      for (let k = 0; k < nz; k++) {
+        const z = options.z[k]!;
+        [v.re[k], v.im[k]] = evaluateFraction(cf, z.re, z.im);
+        if (withBound) v.bound[k] = truncationBound(cf, z.re, z.im);
+      }
       return v;
     };
     const sign = particle ? 1 : -1;
@@ -136,19 +150,17 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
       complex: complex || !target.hamiltonian.real,
       stop: (alpha, beta) => {
         if (alpha.length % CHECK_EVERY !== 0) return false;
-        const now = evaluate(continuedFraction(weight, alpha, beta, sign, e0));
-        let change = 0;
+        const now = evaluate(continuedFraction(weight, alpha, beta, sign, e0), true);
+        let bound = 0;
         let size = 0;
         for (let k = 0; k < nz; k++) {
           size = Math.max(size, Math.hypot(now.re[k]!, now.im[k]!));
-          if (previous !== null) change = Math.max(change, Math.hypot(now.re[k]! - previous.re[k]!, now.im[k]! - previous.im[k]!));
+          bound = Math.max(bound, now.bound[k]!);
         }
-        const done = previous !== null && change <= tol * Math.max(size, 1e-300);
-        previous = now;
-        return done;
+        return bound <= tol * Math.max(size, 1e-300);
       },
     });
-    return evaluate(continuedFraction(weight, run.alpha, run.beta, sign, e0));
+    return evaluate(continuedFraction(weight, run.alpha, run.beta, sign, e0), true);
   }
 
   const diagonalModes = new Set<number>();
@@ -163,91 +175,92 @@ export function greensFunction(model: FermionModel, ground: GroundLevel, options
       offPairs.set(`${a},${b}`, [a, b]);
     }
   }
-  const sameBlock = (i: number, j: number): boolean => !spinSector || (i < spec.lowModes) === (j < spec.lowModes);
-  const coupled = [...offPairs.values()].filter(([i, j]) => sameBlock(i, j));
-  const perState = 2 * (diagonalModes.size + coupled.length * (real ? 1 : 2));
-  const total = perState * ground.states.length;
+  /** Off-diagonal pairs that can be non-zero from a component's sector (one S_z sector: same spin block only). */
+  const coupledFrom = (c: GroundComponent): [number, number][] => {
+    const spec = c.sector.spec;
+    const spinSector = spec.lowCounts.length < spec.lowModes + 1;
+    return [...offPairs.values()].filter(([i, j]) => !spinSector || (i < spec.lowModes) === (j < spec.lowModes));
+  };
+  const perState = (c: GroundComponent): number => 2 * (diagonalModes.size + coupledFrom(c).length * (real ? 1 : 2));
+  const total = components.reduce((sum, c) => sum + perState(c) * c.states.length, 0);
   let done = 0;
   const tick = (): void => {
     done += 1;
     options.onProgress?.(done, total);
   };
 
-  // acc holds Σ over ground states of G_ij; keyed "i,j".
+  // acc holds Σ over ground states of G_ij and of its error bound; keyed "i,j".
   const acc = new Map<string, Values>();
-  const add = (i: number, j: number, v: Values, sr: number, si: number): void => {
+  const add = (i: number, j: number, v: Values): void => {
     const key = `${i},${j}`;
     let a = acc.get(key);
     if (a === undefined) {
-      a = { re: new Float64Array(nz), im: new Float64Array(nz) };
+      a = zeroValues(nz);
       acc.set(key, a);
     }
     for (let k = 0; k < nz; k++) {
-      a.re[k]! += sr * v.re[k]! - si * v.im[k]!;
-      a.im[k]! += sr * v.im[k]! + si * v.re[k]!;
+      a.re[k]! += v.re[k]!;
+      a.im[k]! += v.im[k]!;
+      a.bound[k]! += v.bound[k]!;
     }
   };
-  for (const psi of ground.states) {
-    for (const particle of [true, false]) {
-      const diag = new Map<number, Values>();
-      for (const m of [...diagonalModes].sort((a, b) => a - b)) {
-        const v = fraction(particle, psi, [[m, 1, 0]]);
-        diag.set(m, v);
-        add(m, m, v, 1, 0);
-        tick();
-      }
-      for (const [i, j] of coupled) {
-        const p = fraction(particle, psi, [[i, 1, 0], [j, 1, 0]]);
-        tick();
-        const s = { re: new Float64Array(nz), im: new Float64Array(nz) };
-        for (let k = 0; k < nz; k++) {
-          s.re[k] = diag.get(i)!.re[k]! + diag.get(j)!.re[k]!;
-          s.im[k] = diag.get(i)!.im[k]! + diag.get(j)!.im[k]!;
-        }
-        const uv = { re: new Float64Array(nz), im: new Float64Array(nz) };
-        const vu = { re: new Float64Array(nz), im: new Float64Array(nz) };
-        if (real) {
-          for (let k = 0; k < nz; k++) {
-            uv.re[k] = vu.re[k] = 0.5 * (p.re[k]! - s.re[k]!);
-            uv.im[k] = vu.im[k] = 0.5 * (p.im[k]! - s.im[k]!);
-          }
-        } else {
-          const q = fraction(particle, psi, [[i, 1, 0], [j, 0, 1]]);
+  for (const component of components) {
+    const coupled = coupledFrom(component);
+    for (const psi of component.states) {
+      for (const particle of [true, false]) {
+        const diag = new Map<number, Values>();
+        for (const m of [...diagonalModes].sort((a, b) => a - b)) {
+          const v = fraction(component.sector, particle, psi, [[m, 1, 0]]);
+          diag.set(m, v);
+          add(m, m, v);
           tick();
-          for (let k = 0; k < nz; k++) {
-            // A_uv = ½[P − iQ − (1−i)S], A_vu = ½[P − i(2S − Q) − (1−i)S]
-            const baseRe = p.re[k]! - s.re[k]! - s.im[k]!;
-            const baseIm = p.im[k]! - s.im[k]! + s.re[k]!;
-            uv.re[k] = 0.5 * (baseRe + q.im[k]!);
-            uv.im[k] = 0.5 * (baseIm - q.re[k]!);
-            vu.re[k] = 0.5 * (baseRe + 2 * s.im[k]! - q.im[k]!);
-            vu.im[k] = 0.5 * (baseIm - 2 * s.re[k]! + q.re[k]!);
-          }
         }
-        // particle: u = a_i†ψ, v = a_j†ψ → G⁺_ij = A_uv; hole: u = a_iψ, v = a_jψ → G⁻_ji = A_uv.
-        if (particle) {
-          add(i, j, uv, 1, 0);
-          add(j, i, vu, 1, 0);
-        } else {
-          add(j, i, uv, 1, 0);
-          add(i, j, vu, 1, 0);
+        for (const [i, j] of coupled) {
+          const p = fraction(component.sector, particle, psi, [[i, 1, 0], [j, 1, 0]]);
+          tick();
+          const di = diag.get(i)!;
+          const dj = diag.get(j)!;
+          const uv = zeroValues(nz);
+          const vu = zeroValues(nz);
+          if (real) {
+            for (let k = 0; k < nz; k++) {
+              uv.re[k] = vu.re[k] = 0.5 * (p.re[k]! - di.re[k]! - dj.re[k]!);
+              uv.im[k] = vu.im[k] = 0.5 * (p.im[k]! - di.im[k]! - dj.im[k]!);
+              uv.bound[k] = vu.bound[k] = 0.5 * (p.bound[k]! + di.bound[k]! + dj.bound[k]!);
+            }
+          } else {
+            const q = fraction(component.sector, particle, psi, [[i, 1, 0], [j, 0, 1]]);
+            tick();
+            for (let k = 0; k < nz; k++) {
+              const sRe = di.re[k]! + dj.re[k]!;
+              const sIm = di.im[k]! + dj.im[k]!;
+              // A_uv = ½[P − iQ − (1−i)S], A_vu = ½[P − i(2S − Q) − (1−i)S] = ½[P + iQ − (1+i)S]
+              const baseRe = p.re[k]! - sRe - sIm;
+              const baseIm = p.im[k]! - sIm + sRe;
+              uv.re[k] = 0.5 * (baseRe + q.im[k]!);
+              uv.im[k] = 0.5 * (baseIm - q.re[k]!);
+              vu.re[k] = 0.5 * (baseRe + 2 * sIm - q.im[k]!);
+              vu.im[k] = 0.5 * (baseIm - 2 * sRe + q.re[k]!);
+              uv.bound[k] = vu.bound[k] = 0.5 * (p.bound[k]! + q.bound[k]! + Math.SQRT2 * (di.bound[k]! + dj.bound[k]!));
+            }
+          }
+          // particle: u = a_i†ψ, v = a_j†ψ → G⁺_ij = A_uv; hole: u = a_iψ, v = a_jψ → G⁻_ji = A_uv.
+          if (particle) {
+            add(i, j, uv);
+            add(j, i, vu);
+          } else {
+            add(j, i, uv);
+            add(i, j, vu);
+          }
         }
       }
     }
   }
   for (const entry of sectors.values()) entry.hamiltonian.release();
-  const d = ground.states.length;
+  const d = ground.degeneracy;
   const entries = pairs.map(([i, j]) => {
-    const a = acc.get(`${i},${j}`);
-    const re = new Float64Array(nz);
-    const im = new Float64Array(nz);
-    if (a !== undefined) {
-      for (let k = 0; k < nz; k++) {
-        re[k] = a.re[k]! / d;
-        im[k] = a.im[k]! / d;
-      }
-    }
-    return { i, j, re, im };
+    const a = acc.get(`${i},${j}`) ?? zeroValues(nz);
+    return { i, j, re: a.re.map((x) => x / d), im: a.im.map((x) => x / d), bound: a.bound.map((x) => x / d) };
   });
   return { z: options.z, entries, applications };
 }

@@ -1,64 +1,97 @@
 /**
- * groundLevel: the lowest level of a model in its ground sector by Lanczos with deflation. Each
+ * groundLevel: the lowest level of a model's N-electron sector by Lanczos with deflation. Each
  * eigenvector is found by Lanczos runs kept orthogonal to the ones found before; runs continue
- * until one converges above E0 + degeneracy tolerance, which also gives the gap.
+ * until one converges above E0 + degeneracy tolerance, which also gives the gap. A spin-block model
+ * that fixes no spin is searched S_z sector by S_z sector (CONVENTIONS.md: a multiplet counts whole);
+ * sector ground energies within the degeneracy tolerance form one level.
  */
 import type { FermionModel } from '../model/FermionModel.js';
-import { fockSector, type FockSector } from './fockSector.js';
-import { memoryLimit } from '../core/memoryBudget.js';
+import { ConvergenceError } from './ConvergenceError.js';
+import { fockSector, type FockSector, type SectorSpec } from './fockSector.js';
+import { chooseBasis, type BasisMode } from './internal/chooseBasis.js';
 import { combine, combineByRerun, combineCompact, lanczos, type LanczosSpec, type LanczosSteps } from './internal/lanczos.js';
 import { countedProducts } from './internal/countedProducts.js';
-import { groundSectorSpec } from './internal/modelSectors.js';
+import { groundSectorSpecs, polarizationOf, type SpinSectors } from './internal/modelSectors.js';
 import { randomVector } from './internal/randomVector.js';
 import { ensureSectorFits } from './internal/sectorMemory.js';
+import { spinRotationInvariant } from './internal/spinRotationInvariant.js';
 import { tridiagonalEigen } from './internal/tridiagonalEigen.js';
 import { axpy, norm, orthogonalize, scale, zeroVec, type CVec } from './internal/vec.js';
 import { sectorDimension } from './sectorDimension.js';
 import { sectorHamiltonian, type SectorHamiltonian } from './sectorHamiltonian.js';
 
+export { KEEP_BASIS_DIMENSION, MIN_COMPACT_STEPS, type BasisMode } from './internal/chooseBasis.js';
+export type { SpinSectors } from './internal/modelSectors.js';
+
 export interface GroundLevelOptions {
   /** Residual ‖Hψ − E0ψ‖ each ground vector must reach, relative to max(1, |E0|). Default 1e-10. */
   readonly tolerance?: number;
-  /** Levels within this of E0, relative to max(1, |E0|), count as degenerate. Default 1e-8. */
+  /**
+   * Levels within this of E0, relative to max(1, |E0|), count as degenerate — inside one sector and
+   * between the ground energies of different S_z sectors. Default 1e-8.
+   */
   readonly degeneracyTolerance?: number;
   /** Lanczos steps per cycle before an explicit restart. Default 400. */
   readonly maxSteps?: number;
   /** Seed of the random start vectors. Default 1. */
   readonly seed?: number;
-  /** Byte limit (default: memoryBudget's limit). */
+  /** Byte limit (default: memoryBudget's limit); also the limit the basis choice plans for. */
   readonly memoryLimit?: number;
   /**
    * How each Lanczos run keeps its vectors: 'full' (stored, fully reorthogonalised), 'compact'
    * (single-precision copies, combined then refined by a further cycle), 'rerun' (none: the
-   * recurrence runs again to form the eigenvector). Default: 'full' up to KEEP_BASIS_DIMENSION,
-   * else 'compact' when at least MIN_COMPACT_STEPS single-precision vectors fit in a quarter of
-   * the memory limit (at most 1 GiB), else 'rerun'.
+   * recurrence runs again to form the eigenvector). Default: chooseBasis — from the dimension and
+   * the planned memory limit only (never the machine's free memory).
    */
   readonly basis?: BasisMode;
 }
 
-export type BasisMode = 'full' | 'compact' | 'rerun';
-
-export interface GroundLevel {
+/** The part of the ground level that lies in one sector. */
+export interface GroundComponent {
   readonly sector: FockSector;
   readonly hamiltonian: SectorHamiltonian;
+  /** Orthonormal ground-level vectors in this sector. */
+  readonly states: readonly CVec[];
+  /** N↑ − N↓ of the sector; null when the sector is not a single S_z sector. */
+  readonly spinPolarization: number | null;
+  /** Basis mode the sector's Lanczos runs used. */
+  readonly basis: BasisMode;
+}
+
+/** One sector searched for the ground level and its lowest energy. */
+export interface SectorSearchResult {
+  readonly spinPolarization: number | null;
+  readonly dimension: number;
+  readonly lowestEnergy: number;
+}
+
+export interface GroundLevel {
   readonly energy: number;
+  /** Total number of ground-level states over all components. */
   readonly degeneracy: number;
-  /** E1 − E0 to the next distinct level of the sector; null when the sector has no other level. */
+  /** E1 − E0 to the next distinct level of the N-electron sector; null when it has no other level. */
   readonly gap: number | null;
-  /** Orthonormal basis of the ground level. */
+  /** The ground level, sector by sector (one component unless a multiplet spans several S_z sectors). */
+  readonly components: readonly GroundComponent[];
+  /** 'fixed': the model fixes S_z; 'all': every S_z sector counted; 'none': no spin blocks (whole N sector). */
+  readonly spinSectors: SpinSectors;
+  /** Every sector searched, in search order (sectors skipped by the SU(2) argument are not listed). */
+  readonly searched: readonly SectorSearchResult[];
+  /** The first component's sector (the whole level's when there is one component). */
+  readonly sector: FockSector;
+  /** The first component's Hamiltonian. */
+  readonly hamiltonian: SectorHamiltonian;
+  /** The first component's states; use `components` when the level spans several sectors. */
   readonly states: readonly CVec[];
   /** Largest ‖Hψ − E0ψ‖ over the ground vectors. */
   readonly residual: number;
   /** Products with H used. */
   readonly applications: number;
+  /** Lets the thread pool drop the components' tables. */
+  release(): void;
 }
 
-/** Sectors up to this size keep their Lanczos basis (full reorthogonalisation); larger ones rerun. */
-export const KEEP_BASIS_DIMENSION = 20000;
 const MAX_CYCLES = 30;
-/** Fewest single-precision vectors per cycle worth the 'compact' mode. */
-export const MIN_COMPACT_STEPS = 60;
 /** A 'compact' first cycle stops at this relative residual estimate: its eigenvector is only single-precision accurate. */
 const COMPACT_FLOOR = 1e-7;
 
@@ -68,36 +101,108 @@ interface Lowest {
   residual: number;
 }
 
+interface SectorLevel {
+  readonly component: GroundComponent;
+  /** The sector's lowest energy. */
+  readonly lowest: number;
+  /** Lowest energy found above the level's window in this sector, if any. */
+  readonly above: number | null;
+  readonly residual: number;
+}
+
 /**
- * Finds E0, an orthonormal basis of the ground level and the gap of `model` in its ground sector.
- * @throws InputError when the sector would not fit in memory or the electron count is impossible
+ * Finds E0, an orthonormal basis of the ground level and the gap of `model`'s N-electron sector.
+ * Sector by sector (spin-block models fixing no spin): sectors are searched by |N↑ − N↓| ascending;
+ * for an SU(2)-invariant H (checked symbolically) the search stops at the first |N↑ − N↓| whose
+ * lowest energy is above the level, since a spin-S multiplet has a state in every sector |N↑ − N↓| ≤ 2S.
+ * @throws InputError when a sector would not fit in memory or the electron count is impossible
+ * @throws ConvergenceError when Lanczos does not reach the residual tolerance (naming the residual reached)
  */
 export function groundLevel(model: FermionModel, options: GroundLevelOptions = {}): GroundLevel {
+  const degTol = options.degeneracyTolerance ?? 1e-8;
+  const { spinSectors, specs } = groundSectorSpecs(model);
+  const prune = spinSectors === 'all' && spinRotationInvariant(model);
+  const window = (e: number): number => e + degTol * Math.max(1, Math.abs(e));
+  let applications = 0;
+  const count = (): void => {
+    applications += 1;
+  };
+  let level: SectorLevel[] = [];
+  let energy = Number.POSITIVE_INFINITY;
+  const aboveEnergies: number[] = [];
+  const searched: SectorSearchResult[] = [];
+  const aboveAt = new Set<number>();
+  for (const spec of specs) {
+    const polarization = polarizationOf(model, spec);
+    const size = Math.abs(polarization ?? 0);
+    // SU(2): sector −P has the spectrum of sector P; every |P'| > |P| lies above sector P.
+    if (prune && [...aboveAt].some((p) => size >= p)) continue;
+    const result = solveSector(model, spec, polarization, Number.isFinite(energy) ? energy : null, options, count);
+    searched.push({ spinPolarization: polarization, dimension: result.component.sector.dimension, lowestEnergy: result.lowest });
+    if (result.above !== null) aboveEnergies.push(result.above);
+    if (result.component.states.length === 0) {
+      result.component.hamiltonian.release();
+      aboveAt.add(size);
+      continue;
+    }
+    if (result.lowest > window(energy) || !Number.isFinite(result.lowest)) continue;
+    if (Number.isFinite(energy) && energy > window(result.lowest)) {
+      // A lower level than the one found so far: that one becomes an excited level.
+      aboveEnergies.push(energy);
+      for (const old of level) old.component.hamiltonian.release();
+      level = [];
+    }
+    level.push(result);
+    energy = Math.min(energy, result.lowest);
+  }
+  const components = level.map((l) => l.component);
+  const above = aboveEnergies.filter((e) => e > window(energy));
+  const first = components[0]!;
+  return {
+    energy,
+    degeneracy: components.reduce((sum, c) => sum + c.states.length, 0),
+    gap: above.length === 0 ? null : Math.min(...above) - energy,
+    components,
+    spinSectors,
+    searched,
+    sector: first.sector,
+    hamiltonian: first.hamiltonian,
+    states: first.states,
+    residual: Math.max(...level.map((l) => l.residual)),
+    applications,
+    release: () => {
+      for (const c of components) c.hamiltonian.release();
+    },
+  };
+}
+
+/**
+ * The lowest level of one sector. With `reference` (the lowest energy of sectors searched before),
+ * the search stops as soon as the sector's lowest energy is certainly above the reference's window
+ * (then `states` is empty and `lowest` is that energy).
+ */
+function solveSector(
+  model: FermionModel,
+  spec: SectorSpec,
+  spinPolarization: number | null,
+  reference: number | null,
+  options: GroundLevelOptions,
+  count: () => void,
+): SectorLevel {
   const tol = options.tolerance ?? 1e-10;
   const degTol = options.degeneracyTolerance ?? 1e-8;
   const maxSteps = options.maxSteps ?? 400;
-  const spec = groundSectorSpec(model);
+  const window = (e: number): number => e + degTol * Math.max(1, Math.abs(e));
   const dim = sectorDimension(spec);
-  const complexModel = !isRealModel(model);
-  const compactSteps = Math.min(
-    maxSteps,
-    Math.floor(Math.min(2 ** 30, 0.25 * memoryLimit(options.memoryLimit)) / (4 * dim * (complexModel ? 2 : 1))),
-  );
-  const mode: BasisMode =
-    options.basis ?? (dim <= KEEP_BASIS_DIMENSION ? 'full' : compactSteps >= MIN_COMPACT_STEPS ? 'compact' : 'rerun');
-  const stepsPerCycle = mode === 'compact' ? Math.max(2, compactSteps) : maxSteps;
-  const stored = mode === 'full' ? Math.min(dim, maxSteps) : mode === 'compact' ? Math.ceil(stepsPerCycle / 2) : 0;
-  ensureSectorFits(dim, stored + 8, complexModel, 'the ground-state sector', options.memoryLimit);
+  const choice = chooseBasis(dim, !isRealModel(model), maxSteps, options.memoryLimit, options.basis);
+  ensureSectorFits(dim, choice.storedVectors + 8, !isRealModel(model), 'the ground-state sector', options.memoryLimit);
   const sector = fockSector(spec);
   const hamiltonian = sectorHamiltonian(model, sector);
   const complex = !hamiltonian.real;
-  let applications = 0;
-  const { apply, steps } = countedProducts(hamiltonian, () => {
-    applications += 1;
-  });
+  const { apply, steps } = countedProducts(hamiltonian, count);
   const states: CVec[] = [];
-  let energy = Number.NaN;
-  let gap: number | null = null;
+  let lowest = Number.NaN;
+  let above: number | null = null;
   let residual = 0;
   for (let found = 0; found <= dim; found++) {
     const start = randomVector(dim, complex, (options.seed ?? 1) + found);
@@ -106,17 +211,26 @@ export function groundLevel(model: FermionModel, options: GroundLevelOptions = {
     const size = norm(start);
     if (found === dim || size < 1e-8) break;
     scale(1 / size, start);
-    const target = found === 0 ? null : energy + degTol * Math.max(1, Math.abs(energy));
-    const lowest = lowestEigenpair(apply, steps, start, states, { tol, maxSteps: stepsPerCycle, mode, complex, aboveOf: target, dim });
-    if (target !== null && lowest.value > target) {
-      gap = lowest.value - energy;
+    const levelEnergy = found === 0 ? reference : Math.min(lowest, reference ?? lowest);
+    const target = levelEnergy === null ? null : window(levelEnergy);
+    const next = lowestEigenpair(apply, steps, start, states, {
+      tol,
+      maxSteps: choice.stepsPerCycle,
+      mode: choice.mode,
+      complex,
+      aboveOf: target,
+      dim,
+      what: `the ground level (sector of dimension ${dim})`,
+    });
+    if (found === 0) lowest = next.value;
+    if (target !== null && next.value > target) {
+      above = next.value;
       break;
     }
-    if (found === 0) energy = lowest.value;
-    states.push(lowest.vector!);
-    residual = Math.max(residual, lowest.residual);
+    states.push(next.vector!);
+    residual = Math.max(residual, next.residual);
   }
-  return { sector, hamiltonian, energy, degeneracy: states.length, gap, states, residual, applications };
+  return { component: { sector, hamiltonian, states, spinPolarization, basis: choice.mode }, lowest, above, residual };
 }
 
 function isRealModel(model: FermionModel): boolean {
@@ -131,6 +245,8 @@ interface LowestOptions {
   /** When set, stop as soon as the lowest level is certainly above this (only its value is needed). */
   readonly aboveOf: number | null;
   readonly dim: number;
+  /** What is being computed, for the error message. */
+  readonly what: string;
 }
 
 /** Lowest eigenpair in the complement of `deflate`, by restarted Lanczos. */
@@ -142,6 +258,7 @@ function lowestEigenpair(
   o: LowestOptions,
 ): Lowest {
   let start = start0;
+  let lastResidual = Number.NaN;
   for (let cycle = 0; cycle < MAX_CYCLES; cycle++) {
     let theta = 0;
     let certainlyAbove = false;
@@ -199,6 +316,12 @@ function lowestEigenpair(
       return { value: theta, vector, residual };
     }
     start = vector;
+    lastResidual = residual / Math.max(1, Math.abs(theta));
   }
-  throw new Error(`groundLevel: Lanczos did not reach the residual tolerance in ${MAX_CYCLES} cycles`);
+  throw new ConvergenceError(
+    `Lanczos did not reach the residual tolerance ${o.tol} for ${o.what} in ${MAX_CYCLES} restart cycles ` +
+      `(relative residual reached ${lastResidual.toExponential(2)}); the level may be nearly degenerate: ` +
+      `try a larger degeneracy tolerance or a smaller model`,
+  );
 }
+

@@ -6,8 +6,6 @@
 
 import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 
-
-
 /** One two-body coefficient V_ijkl = <ij|v|kl>; repeated (i,j,k,l) entries are already summed. */
 export interface TwoBodyTerm {
   readonly i: number;
@@ -43,7 +41,11 @@ export interface FermionModel {
   readonly electrons: number;
   /** Presets only: the mode indices of each spin block (up block first, then down). */
   readonly spinBlocks?: { readonly up: readonly number[]; readonly down: readonly number[] };
-  /** Presets only: number of up minus down electrons of the sector to solve in. */
+  /**
+   * Presets only, and only when the model file gives `spin` (or code sets it): N↑ − N↓ of the one
+   * S_z sector the ground level is restricted to. Absent: the ground level is that of the whole
+   * N-electron sector, every S_z sector counting (CONVENTIONS.md) — there is no default S_z.
+   */
   readonly spinPolarization?: number;
   /** T, chemical potential included. Hermitian. */
   readonly oneBody: ComplexMatrix;

@@ -1,7 +1,10 @@
 // describeModel: a one-line human summary of a model for CLI output.
 import type { FermionModel } from './FermionModel.js';
 
-/** E.g. `hubbard-dimer: Hubbard chain of 2 sites, 4 modes, 2 electrons (spin 0), η = 0.1`. */
+/**
+ * E.g. `hubbard-dimer: Hubbard chain of 2 sites, 4 modes, 2 electrons (spin 0 fixed), η = 0.1`; a preset
+ * that fixes no spin says `(all S_z)`.
+ */
 export function describeModel(model: FermionModel): string {
   const form = model.form;
   let kind = 'model';
@@ -11,6 +14,6 @@ export function describeModel(model: FermionModel): string {
   } else if (form?.kind === 'impurity') {
     kind = `Anderson impurity with ${form.bathLevels} bath level${form.bathLevels === 1 ? '' : 's'}`;
   }
-  const spin = model.spinPolarization === undefined ? '' : ` (spin ${model.spinPolarization})`;
+  const spin = model.spinPolarization !== undefined ? ` (spin ${model.spinPolarization} fixed)` : model.spinBlocks !== undefined ? ' (all S_z)' : '';
   return `${model.name}: ${kind}, ${model.modes} modes, ${model.electrons} electron${model.electrons === 1 ? '' : 's'}${spin}, η = ${model.broadening}`;
 }

@@ -12,6 +12,7 @@ import { defaultGrid } from './internal/defaultGrid.js';
 import { detectForm } from './internal/detectForm.js';
 import { explicitSchema, hubbardSchema, impuritySchema, type CommonInput } from './internal/modelSchemas.js';
 import { problemsError, type Problem } from './internal/Problem.js';
+import { energyScale, gridProblem } from './modelLimits.js';
 import { zodProblems } from './internal/zodProblems.js';
 
 /** Broadening η used when a model file gives none. */
@@ -57,23 +58,24 @@ export function parseModel(input: unknown, source: string): FermionModel {
   if (common.electrons > modes) {
     problems.push({ path: ['electrons'], message: `${common.electrons} electrons do not fit in ${modes} modes` });
   }
-  const spinPolarization = spinBlocks !== undefined && common.electrons <= modes
-    ? checkSpinSector(common.electrons, spin, spinBlocks.up.length, problems)
-    : undefined;
-  const grid = common.grid;
-  if (grid !== undefined && grid.points > 1 && !(grid.from < grid.to)) {
-    problems.push({ path: ['grid'], message: `needs from < to when points > 1, got from ${grid.from}, to ${grid.to}` });
+  if (spinBlocks !== undefined && spin !== undefined && common.electrons <= modes) {
+    checkSpinSector(common.electrons, spin, spinBlocks.up.length, problems);
   }
+  const broadening = common.broadening ?? DEFAULT_BROADENING;
+  const grid = common.grid;
+  const wrongGrid = grid === undefined ? undefined : gridProblem(grid, energyScale(oneBody, twoBody, broadening));
+  if (wrongGrid !== undefined) problems.push({ path: ['grid'], message: wrongGrid });
   const oneBodyInB = applySplit(oneBody, common.split?.oneBodyInB ?? [], problems);
   if (problems.length > 0) throw problemsError(source, problems);
 
-  const broadening = common.broadening ?? DEFAULT_BROADENING;
   return {
     name: common.name ?? basename(source).replace(/\.json$/i, ''),
     form,
     modes,
     electrons: common.electrons,
-    ...(spinBlocks === undefined ? {} : { spinBlocks, spinPolarization }),
+    ...(spinBlocks === undefined ? {} : { spinBlocks }),
+    // Only a `spin` the file gives restricts the ground level to one S_z sector; there is no default.
+    ...(spin === undefined ? {} : { spinPolarization: spin }),
     oneBody,
     oneBodyInB,
     twoBody,

@@ -1,14 +1,21 @@
 /**
  * lineChartSvg: a line chart of one or more named series as SVG text, drawn with vega-lite compiled
- * to vega and rendered server side (renderer 'none', no canvas). Same input, same bytes.
+ * to vega and rendered server side (renderer 'none', no canvas). Same input, same bytes. Every colour
+ * group gets its own colour (distinctColors), never one shared with another group of the chart;
+ * series of one group are told apart by line style.
  */
 import * as vega from 'vega';
 import { compile, type TopLevelSpec } from 'vega-lite';
+import { distinctColors } from './distinctColors.js';
 
 export interface LineSeries {
   readonly name: string;
   readonly x: ArrayLike<number>;
   readonly y: ArrayLike<number>;
+  /** Colour group (legend "series"); default: the name. */
+  readonly group?: string;
+  /** Line style (legend "part"), one of the chart's `styles`; default: solid. */
+  readonly style?: string;
 }
 
 export interface LineChart {
@@ -17,16 +24,25 @@ export interface LineChart {
   readonly xTitle: string;
   readonly yTitle: string;
   readonly series: readonly LineSeries[];
+  /** Line styles in legend order, e.g. ['Re', 'Im']: the first is solid, the next ones dashed ever shorter. */
+  readonly styles?: readonly string[];
   /** Default 640 × 360. */
   readonly width?: number;
   readonly height?: number;
 }
 
-/** Renders the chart; the series legend is titled "series". */
+const DASHES: readonly (readonly number[])[] = [[1, 0], [6, 3], [2, 2], [8, 3, 2, 3]];
+
+/** Renders the chart; the colour legend is titled "series", the style legend "part". */
 export async function lineChartSvg(chart: LineChart): Promise<string> {
-  const values: { x: number; y: number; series: string }[] = [];
+  const styles = chart.styles ?? [];
+  if (styles.length > DASHES.length) throw new RangeError(`lineChartSvg: at most ${DASHES.length} line styles, got ${styles.length}`);
+  const groups = [...new Set(chart.series.map((s) => s.group ?? s.name))];
+  const values: { x: number; y: number; series: string; group: string; style: string }[] = [];
   for (const s of chart.series) {
-    for (let k = 0; k < s.x.length; k++) values.push({ x: s.x[k]!, y: s.y[k]!, series: s.name });
+    const style = s.style ?? styles[0] ?? '';
+    if (styles.length > 0 && !styles.includes(style)) throw new RangeError(`lineChartSvg: unknown style "${style}"`);
+    for (let k = 0; k < s.x.length; k++) values.push({ x: s.x[k]!, y: s.y[k]!, series: s.name, group: s.group ?? s.name, style });
   }
   const spec: TopLevelSpec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
@@ -39,7 +55,18 @@ export async function lineChartSvg(chart: LineChart): Promise<string> {
     encoding: {
       x: { field: 'x', type: 'quantitative', title: chart.xTitle },
       y: { field: 'y', type: 'quantitative', title: chart.yTitle },
-      color: { field: 'series', type: 'nominal', title: 'series', sort: chart.series.map((s) => s.name) },
+      color: { field: 'group', type: 'nominal', title: 'series', scale: { domain: groups, range: distinctColors(groups.length) } },
+      detail: { field: 'series', type: 'nominal' },
+      ...(styles.length === 0
+        ? {}
+        : {
+            strokeDash: {
+              field: 'style',
+              type: 'nominal',
+              title: 'part',
+              scale: { domain: [...styles], range: DASHES.slice(0, styles.length).map((d) => [...d]) },
+            },
+          }),
     },
   };
   const view = new vega.View(vega.parse(compile(spec).spec), { renderer: 'none' });

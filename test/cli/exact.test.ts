@@ -1,4 +1,5 @@
-// polewright exact: summary, --json shape, files written (deterministic), bad options → exit 2 naming the option.
+// polewright exact: summary, --json shape, files written (deterministic), bad options → exit 2 naming the option,
+// spin multiplets counted whole unless the file fixes spin, error bounds in every output.
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -21,6 +22,18 @@ writeFileSync(
     grid: { from: -4, to: 4, points: 41 },
   }),
 );
+
+const chain3 = join(dir, 'chain3.json');
+const chain3Model = {
+  electrons: 3,
+  lattice: { shape: 'chain', sites: 3, hopping: 1 },
+  interaction: 4,
+  chemicalPotential: 0.5,
+  grid: { from: -3, to: 3, points: 7 },
+};
+writeFileSync(chain3, JSON.stringify(chain3Model));
+const chain3Fixed = join(dir, 'chain3-fixed.json');
+writeFileSync(chain3Fixed, JSON.stringify({ ...chain3Model, spin: -1 }));
 
 async function capture(run: () => Promise<void>): Promise<string> {
   let out = '';
@@ -62,7 +75,14 @@ describe('polewright exact', () => {
   it('--json prints exactly the documented keys with one entry per pair', async () => {
     const out = await capture(() => exactCommand(dimer, { json: true, grid: '-1:1:3', pairs: '0:0,0:1', eta: '0.2' }));
     const obj = JSON.parse(out);
-    expect(Object.keys(obj)).toEqual(['groundEnergy', 'degeneracy', 'gap', 'electrons', 'modes', 'broadening', 'frequencies', 'entries']);
+    expect(Object.keys(obj)).toEqual([
+      'groundEnergy', 'degeneracy', 'gap', 'electrons', 'modes', 'spinSectors', 'spin', 'groundSectors',
+      'broadening', 'tolerance', 'frequencies', 'entries', 'selfEnergy', 'errors',
+    ]);
+    expect(obj.spinSectors).toBe('fixed');
+    expect(obj.spin).toBe(0);
+    expect(obj.selfEnergy).toBeNull();
+    expect(obj.entries[0].bounds).toHaveLength(3);
     expect(obj.frequencies).toEqual([-1, 0, 1]);
     expect(obj.broadening).toBe(0.2);
     expect(obj.entries.map((e: { i: number; j: number }) => [e.i, e.j])).toEqual([[0, 0], [0, 1]]);
@@ -76,14 +96,47 @@ describe('polewright exact', () => {
     await capture(() => exactCommand(dimer, { out: outDir }));
     const first = ['green.json', 'green.csv', 'spectral.svg', 'selfenergy.svg'].map((f) => readFileSync(join(outDir, f), 'utf8'));
     expect(first[0]).toBe(json);
-    expect(first[1]!.split('\n')[0]).toBe('omega,i,j,re,im');
+    expect(first[1]!.split('\n')[0]).toBe('omega,i,j,re,im,bound');
     expect(first[1]!.trim().split('\n')).toHaveLength(1 + 41 * 16);
     expect(first[2]).toMatch(/^<svg/);
     expect(first[2]).toContain('A(ω) (1/energy)');
-    expect(first[3]).toContain('Im Σ_00');
+    expect(first[3]).toContain('Σ_00');
+    expect(first[3]).toContain('Re solid, Im dashed');
     await capture(() => exactCommand(dimer, { out: outDir }));
     const second = ['green.json', 'green.csv', 'spectral.svg', 'selfenergy.svg'].map((f) => readFileSync(join(outDir, f), 'utf8'));
     expect(second).toEqual(first);
+  });
+
+  it('counts a doublet twice and averages both S_z sectors unless the file fixes spin, and says which', async () => {
+    const all = JSON.parse(await capture(() => exactCommand(chain3, { json: true })));
+    expect(all.degeneracy).toBe(2);
+    expect(all.spinSectors).toBe('all');
+    expect(all.groundSectors.map((g: { up: number; down: number }) => [g.up, g.down])).toEqual([[2, 1], [1, 2]]);
+    const fixed = JSON.parse(await capture(() => exactCommand(chain3Fixed, { json: true })));
+    expect(fixed.degeneracy).toBe(1);
+    expect([fixed.spinSectors, fixed.spin]).toEqual(['fixed', -1]);
+    expect(await capture(() => exactCommand(chain3, {}))).toMatch(/spin: every S_z sector counts .*2 up 1 down \(1\), 1 up 2 down \(1\)/);
+    expect(await capture(() => exactCommand(chain3Fixed, {}))).toMatch(/spin: fixed by the model file to N↑ − N↓ = -1; .*restricted to that S_z sector/);
+  });
+
+  it('reports bounds on G and Σ in text and JSON, and --tolerance sets the continued-fraction tolerance', async () => {
+    const text = await capture(() => exactCommand(chain3, {}));
+    expect(text).toMatch(/error: \|δG_ij\| ≤ \d\.\d\de[-+]\d+ .*rigorous continued-fraction truncation bound; tolerance 0\.000001/);
+    expect(text).toMatch(/self-energy: \|δΣ_ij\| ≤ \d\.\d\de[-+]\d+/);
+    const obj = JSON.parse(await capture(() => exactCommand(chain3, { json: true, tolerance: '1e-3' })));
+    expect(obj.tolerance).toBe(1e-3);
+    expect(obj.selfEnergy.entries).toHaveLength(36);
+    expect(obj.selfEnergy.bounds).toHaveLength(7);
+    expect(obj.errors.green).toMatch(/rigorous/);
+    expect(await inputErrorOf(() => exactCommand(chain3, { tolerance: '0' }))).toMatch(/--tolerance/);
+    expect(await inputErrorOf(() => exactCommand(chain3, { tolerance: '1e-20' }))).toMatch(/--tolerance must lie from 1e-14 to 0\.1/);
+    expect(await inputErrorOf(() => exactCommand(chain3, { tolerance: 'x' }))).toMatch(/--tolerance/);
+  });
+
+  it('refuses grids beyond the model scale or with too many points, naming --grid', async () => {
+    expect(await inputErrorOf(() => exactCommand(dimer, { grid: '-1e308:1e308:11' }))).toMatch(/--grid: from and to must lie within/);
+    expect(await inputErrorOf(() => exactCommand(dimer, { grid: '-1:1:1000000000' }))).toMatch(/--grid .*points must be an integer from 1 to 100000/);
+    expect(await inputErrorOf(() => exactCommand(dimer, { eta: '1e308' }))).toMatch(/--eta must lie from/);
   });
 
   it('names the option in the error for bad --eta, --grid and --pairs', async () => {

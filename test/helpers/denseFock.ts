@@ -26,27 +26,34 @@ function apply(state: number, ops: [number, boolean][]): [number, number] | null
   return [s, sign];
 }
 
-export function sectorStates(modes: number, electrons: number): number[] {
+/** Patterns with `electrons` bits; with `up`, only those with `up` bits among the low modes 0…modes/2−1. */
+export function sectorStates(modes: number, electrons: number, up?: number): number[] {
   const out: number[] = [];
   for (let s = 0; s < 1 << modes; s++) {
     let c = 0;
-    for (let q = 0; q < modes; q++) c += (s >> q) & 1;
-    if (c === electrons) out.push(s);
+    let low = 0;
+    for (let q = 0; q < modes; q++) {
+      c += (s >> q) & 1;
+      if (q < modes / 2) low += (s >> q) & 1;
+    }
+    if (c === electrons && (up === undefined || low === up)) out.push(s);
   }
   return out;
 }
 
-/** Dense H in the N-electron sector, as rows of {re, im}. */
-export function denseHamiltonian(model: FermionModel, electrons: number): Amp[][] {
+/** Dense H in the N-electron sector (with `up`: its S_z sector of `up` low-mode electrons), as rows of {re, im}. */
+export function denseHamiltonian(model: FermionModel, electrons: number, up?: number): Amp[][] {
   const n = model.modes;
-  const states = sectorStates(n, electrons);
+  const states = sectorStates(n, electrons, up);
   const index = new Map(states.map((s, k) => [s, k]));
   const H = states.map(() => states.map(() => ({ re: 0, im: 0 })));
   states.forEach((s, col) => {
     const add = (ops: [number, boolean][], re: number, im: number): void => {
+      if (re === 0 && im === 0) return;
       const r = apply(s, ops);
       if (r === null) return;
-      const row = index.get(r[0])!;
+      const row = index.get(r[0]);
+      if (row === undefined) throw new Error('denseHamiltonian: H leaves the requested S_z sector');
       H[row]![col]!.re += r[1] * re;
       H[row]![col]!.im += r[1] * im;
     };
@@ -58,9 +65,9 @@ export function denseHamiltonian(model: FermionModel, electrons: number): Amp[][
   return H;
 }
 
-/** Ground energy and an orthonormal ground-level basis (mathjs eigs on the real embedding). */
-export function denseGround(model: FermionModel, electrons: number, tol = 1e-8): { energy: number; states: Amp[][]; values: number[] } {
-  const H = denseHamiltonian(model, electrons);
+/** Ground energy and an orthonormal ground-level basis (mathjs eigs on the real embedding); `up` as in denseHamiltonian. */
+export function denseGround(model: FermionModel, electrons: number, tol = 1e-8, up?: number): { energy: number; states: Amp[][]; values: number[] } {
+  const H = denseHamiltonian(model, electrons, up);
   const d = H.length;
   const big: number[][] = [];
   for (let r = 0; r < 2 * d; r++) {
@@ -101,12 +108,15 @@ export function denseGround(model: FermionModel, electrons: number, tol = 1e-8):
   return { energy: e0, states: basis, values: values.slice().sort((a, b) => a - b) };
 }
 
-/** G_ij(z) for all i, j from the resolvents (z ∓ (H − E0))⁻¹ of the N±1 sectors (mathjs inv). */
-export function denseGreen(model: FermionModel, z: Amp): { re: number; im: number }[][] {
+/**
+ * G_ij(z) for all i, j from the resolvents (z ∓ (H − E0))⁻¹ of the whole N±1 sectors (mathjs inv), averaged
+ * over the ground level of the whole N-electron sector — or, with `up`, of its S_z sector of `up` low-mode electrons.
+ */
+export function denseGreen(model: FermionModel, z: Amp, up?: number): { re: number; im: number }[][] {
   const n = model.modes;
   const N = model.electrons;
-  const ground = denseGround(model, N);
-  const states = sectorStates(n, N);
+  const ground = denseGround(model, N, 1e-8, up);
+  const states = sectorStates(n, N, up);
   const G = Array.from({ length: n }, () => Array.from({ length: n }, () => ({ re: 0, im: 0 })));
   for (const particle of [true, false]) {
     const M = N + (particle ? 1 : -1);

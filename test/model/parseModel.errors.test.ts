@@ -48,8 +48,8 @@ describe('parseModel(input, source) rejects bad input with an InputError naming 
   });
 
   it('η ≤ 0', () => {
-    expect(messageOf({ ...base, broadening: 0 })).toBe('model.json: broadening: must be > 0, got 0');
-    expect(messageOf({ ...base, broadening: -0.1 })).toBe('model.json: broadening: must be > 0, got -0.1');
+    expect(messageOf({ ...base, broadening: 0 })).toBe('model.json: broadening: must be ≥ 1e-9, got 0');
+    expect(messageOf({ ...base, broadening: -0.1 })).toBe('model.json: broadening: must be ≥ 1e-9, got -0.1');
   });
 
   it('electrons > modes', () => {
@@ -71,7 +71,7 @@ describe('parseModel(input, source) rejects bad input with an InputError naming 
 
   it('several problems at once, one line each', () => {
     const lines = messageOf({ modes: 2, electrons: 1, broadening: 0, grid: { from: 0, to: 1, points: 0 } }).split('\n');
-    expect(lines).toEqual(['model.json: broadening: must be > 0, got 0', 'model.json: grid.points: must be ≥ 1, got 0']);
+    expect(lines).toEqual(['model.json: broadening: must be ≥ 1e-9, got 0', 'model.json: grid.points: must be ≥ 1, got 0']);
     const semantic = messageOf({ modes: 2, electrons: 3, oneBody: [[0, 2, 1]], grid: { from: 1, to: 0, points: 2 } }).split('\n');
     expect(semantic).toHaveLength(3);
   });

@@ -60,8 +60,9 @@ describe('parseModel(input, source) — Hubbard preset', () => {
     expect(at(wrapped, 3, 5)).toBe(-1);
   });
 
-  it('defaults the spin sector to electrons mod 2 and checks a given one', () => {
-    expect(hubbard({ shape: 'chain', sites: 3 }, { electrons: 3 }).spinPolarization).toBe(1);
+  it('fixes no S_z sector unless the file gives spin, and checks a given one', () => {
+    expect(hubbard({ shape: 'chain', sites: 3 }, { electrons: 3 }).spinPolarization).toBeUndefined();
+    expect(hubbard({ shape: 'chain', sites: 3 }, { electrons: 3, spin: 1 }).spinPolarization).toBe(1);
     expect(hubbard({ shape: 'chain', sites: 3 }, { electrons: 4, spin: -2 }).spinPolarization).toBe(-2);
     expect(() => hubbard({ shape: 'chain', sites: 3 }, { electrons: 4, spin: 1 })).toThrow(/h\.json: spin: .*parity/);
     expect(() => hubbard({ shape: 'chain', sites: 3 }, { electrons: 2, spin: 4 })).toThrow(/h\.json: spin: .*≤ electrons/);

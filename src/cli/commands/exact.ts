@@ -1,7 +1,8 @@
 /**
- * The `exact` command: solves a model exactly (ground level, G_ij on the frequency grid, self-energy),
+ * The `exact` command: solves a model exactly (ground level over every S_z sector unless the model file
+ * fixes `spin`, G_ij on the frequency grid with truncation bounds, self-energy with a propagated bound),
  * prints a summary or the JSON object, and with --out writes green.json, green.csv, spectral.svg and
- * selfenergy.svg.
+ * selfenergy.svg. A ground level Lanczos cannot certify is reported with exit code 1.
  */
 import { join } from 'node:path';
 import cliProgress from 'cli-progress';
@@ -9,14 +10,19 @@ import type { Command } from 'commander';
 import { InputError } from '../../core/InputError.js';
 import { writeFileAtomic } from '../../core/writeFileAtomic.js';
 import { accessSync, constants, mkdirSync } from 'node:fs';
+import { isConvergenceError } from '../../exact/ConvergenceError.js';
+import { DEFAULT_GREEN_TOLERANCE } from '../../exact/greensFunction.js';
 import { solveExact, type ExactSolution } from '../../exact/solveExact.js';
-import { spectralFunction } from '../../exact/spectralFunction.js';
 import { describeModel } from '../../model/describeModel.js';
 import type { FermionModel, FrequencyGrid } from '../../model/FermionModel.js';
 import { loadModelFile } from '../../model/loadModelFile.js';
+import { energyScale, gridProblem, MAX_BROADENING, MAX_GRID_POINTS, MIN_BROADENING } from '../../model/modelLimits.js';
 import { greenCsv, greenJson } from '../../report/greenTables.js';
-import { lineChartSvg } from '../../report/lineChartSvg.js';
+import { exactPlots } from '../../report/exactPlots.js';
 import { parsePositiveNumber } from '../options.js';
+
+/** Accepted --tolerance range: below 1e-14 the bound cannot beat rounding in G; above 0.1 it says little. */
+export const TOLERANCE_RANGE = [1e-14, 0.1] as const;
 
 export interface ExactCommandOptions {
   readonly out?: string;
@@ -24,6 +30,7 @@ export interface ExactCommandOptions {
   readonly eta?: string;
   readonly grid?: string;
   readonly pairs?: string;
+  readonly tolerance?: string;
 }
 
 /** Parses --grid from:to:points. */
@@ -33,7 +40,9 @@ export function parseGrid(text: string): FrequencyGrid {
   if (parts.length !== 3) throw bad('three fields separated by ":"');
   const [from, to] = parts.slice(0, 2).map((p) => (p.trim() === '' ? Number.NaN : Number(p)));
   if (!Number.isFinite(from) || !Number.isFinite(to)) throw bad('from and to must be finite numbers');
-  if (!/^\d+$/.test(parts[2]!.trim()) || Number(parts[2]) < 1) throw bad('points must be an integer ≥ 1');
+  if (!/^\d+$/.test(parts[2]!.trim()) || Number(parts[2]) < 1 || Number(parts[2]) > MAX_GRID_POINTS) {
+    throw bad(`points must be an integer from 1 to ${MAX_GRID_POINTS}`);
+  }
   const points = Number(parts[2]);
   if (points > 1 && !(to! > from!)) throw bad('to must be greater than from');
   return { from: from!, to: to!, points };
@@ -59,15 +68,36 @@ function seconds(ms: number): string {
   return `${(ms / 1000).toFixed(3)} s`;
 }
 
+function spinLine(s: ExactSolution): string {
+  const sector = s.sector;
+  if (sector.spinSectors === 'fixed') {
+    return `spin: fixed by the model file to N↑ − N↓ = ${sector.up! - sector.down!}; the ground level and the average are restricted to that S_z sector`;
+  }
+  if (sector.spinSectors === 'none') return 'spin: no spin blocks; the ground level is that of the whole electron-number sector';
+  const parts = sector.groundSectors.map((g) => `${g.up} up ${g.down} down (${g.states})`);
+  return `spin: every S_z sector counts (the model file fixes none); ground level in ${parts.join(', ')}, averaged with equal weight`;
+}
+
+function bound(x: number): string {
+  return Number.isFinite(x) ? x.toExponential(2) : 'none (the perturbation bound does not apply)';
+}
+
 function summary(model: FermionModel, s: ExactSolution, notes: readonly string[]): string {
   const spin = s.sector.up === null ? 'all S_z' : `${s.sector.up} up, ${s.sector.down} down`;
   const lines = [
     `model: ${describeModel(model)}`,
     `sector: ${s.sector.electrons} electrons (${spin}), dimension ${s.sector.dimension}`,
+    spinLine(s),
     `ground energy: ${s.groundEnergy.toPrecision(12)} (residual ${s.residual.toExponential(2)})`,
     `degeneracy: ${s.degeneracy}`,
     `gap: ${s.gap === null ? 'none (no other level in the sector)' : s.gap.toPrecision(10)}`,
     `green's function: ${s.green.length} entries at ${s.frequencies.length} frequencies, broadening ${s.broadening}`,
+    `  error: |δG_ij| ≤ ${bound(Math.max(0, ...s.greenBound))} over all entries and frequencies ` +
+      `(rigorous continued-fraction truncation bound; tolerance ${s.tolerance} of max |G|)`,
+    s.selfEnergyBound === null
+      ? 'self-energy: not computed (it needs all n² entries of G)'
+      : `self-energy: |δΣ_ij| ≤ ${bound(Math.max(0, ...s.selfEnergyBound))} over all entries and frequencies ` +
+        '(propagated from the bounds on G: ‖G⁻¹‖²‖δG‖/(1 − ‖G⁻¹‖‖δG‖))',
     `timings: ground level ${seconds(s.timings.groundMs)}, green's function ${seconds(s.timings.greenMs)}, total ${seconds(s.timings.totalMs)}`,
     ...notes,
   ];
@@ -90,78 +120,85 @@ async function writeOutputs(dir: string, s: ExactSolution, notes: string[]): Pro
     ['green.json', `${JSON.stringify(greenJson(s))}\n`],
     ['green.csv', greenCsv(s)],
   ];
-  const diagonal = s.green.filter((e) => e.i === e.j);
-  if (diagonal.length > 0) {
-    const svg = await lineChartSvg({
-      title: `Spectral function A_ii(ω) = −Im G_ii(ω + iη)/π, η = ${s.broadening}`,
-      xTitle: 'ω (model energy units)',
-      yTitle: 'A(ω) (1/energy)',
-      series: diagonal.map((e) => ({ name: `A_${e.i}${e.i}`, x: s.frequencies, y: spectralFunction(e) })),
-    });
-    files.push(['spectral.svg', svg]);
-  } else {
-    notes.push('spectral.svg not written: --pairs selects no diagonal entry');
+  const plots = await exactPlots(s);
+  for (const [name, svg] of [['spectral.svg', plots.spectral], ['selfenergy.svg', plots.selfEnergy]] as const) {
+    if (svg !== null) files.push([name, svg]);
   }
-  if (s.selfEnergy !== null) {
-    const sigma = s.selfEnergy.filter((e) => e.i === e.j);
-    const svg = await lineChartSvg({
-      title: `Self-energy Σ_ii(ω + iη), η = ${s.broadening}`,
-      xTitle: 'ω (model energy units)',
-      yTitle: 'Σ(ω + iη) (energy units)',
-      series: sigma.flatMap((e) => [
-        { name: `Re Σ_${e.i}${e.i}`, x: s.frequencies, y: e.re },
-        { name: `Im Σ_${e.i}${e.i}`, x: s.frequencies, y: e.im },
-      ]),
-    });
-    files.push(['selfenergy.svg', svg]);
-  } else {
-    notes.push('selfenergy.svg not written: the self-energy needs all n² entries of G (drop --pairs)');
-  }
+  notes.push(...plots.notes);
   for (const [name, content] of files) writeFileAtomic(join(dir, name), content);
   notes.push(`wrote: ${files.map(([name]) => join(dir, name)).join(', ')}`);
 }
 
-/** Runs `polewright exact` in-process: writes to stdout (and stderr for progress). */
+/** Parses --tolerance: a number within TOLERANCE_RANGE. */
+export function parseTolerance(text: string): number {
+  const value = parsePositiveNumber('--tolerance', text);
+  const [low, high] = TOLERANCE_RANGE;
+  if (value < low || value > high) throw new InputError(`--tolerance must lie from ${low} to ${high}, got "${text}"`);
+  return value;
+}
+
+/** Runs `polewright exact` in-process: writes to stdout (and stderr for progress and convergence failures). */
 export async function exactCommand(file: string, options: ExactCommandOptions): Promise<void> {
   const eta = options.eta === undefined ? undefined : parsePositiveNumber('--eta', options.eta);
+  if (eta !== undefined && (eta < MIN_BROADENING || eta > MAX_BROADENING)) {
+    throw new InputError(`--eta must lie from ${MIN_BROADENING} to ${MAX_BROADENING}, got "${options.eta}"`);
+  }
   const grid = options.grid === undefined ? undefined : parseGrid(options.grid);
+  const tolerance = options.tolerance === undefined ? undefined : parseTolerance(options.tolerance);
   const model = loadModelFile(file);
+  if (grid !== undefined) {
+    const wrong = gridProblem(grid, energyScale(model.oneBody, model.twoBody, eta ?? model.broadening));
+    if (wrong !== undefined) throw new InputError(`--grid: ${wrong}`);
+  }
   const pairs = options.pairs === undefined ? undefined : parsePairs(options.pairs, model.modes);
   if (options.out !== undefined) prepareOutputDirectory(options.out);
   const bar = process.stderr.isTTY
     ? new cliProgress.SingleBar({ stream: process.stderr, format: 'exact |{bar}| {value}/{total} continued fractions' }, cliProgress.Presets.shades_classic)
     : null;
   let started = false;
-  const solution = solveExact(model, {
-    ...(eta === undefined ? {} : { broadening: eta }),
-    ...(grid === undefined ? {} : { grid }),
-    ...(pairs === undefined ? {} : { pairs }),
-    onProgress: (done, total) => {
-      if (bar === null) return;
-      if (!started) {
-        bar.start(total, 0);
-        started = true;
-      }
-      bar.update(done);
-    },
-  });
-  if (started) bar!.stop();
+  let solution: ExactSolution;
+  try {
+    solution = solveExact(model, {
+      ...(eta === undefined ? {} : { broadening: eta }),
+      ...(grid === undefined ? {} : { grid }),
+      ...(pairs === undefined ? {} : { pairs }),
+      ...(tolerance === undefined ? {} : { tolerance }),
+      onProgress: (done, total) => {
+        if (bar === null) return;
+        if (!started) {
+          bar.start(total, 0);
+          started = true;
+        }
+        bar.update(done);
+      },
+    });
+  } catch (error) {
+    if (!isConvergenceError(error)) throw error;
+    process.stderr.write(`polewright: ${error.message}\n`);
+    process.exitCode = 1;
+    return;
+  } finally {
+    if (started) bar!.stop();
+  }
   const notes: string[] = [];
   if (options.out !== undefined) await writeOutputs(options.out, solution, notes);
-  else if (solution.selfEnergy === null) notes.push('self-energy not computed: it needs all n² entries of G');
   process.stdout.write(options.json === true ? `${JSON.stringify(greenJson(solution))}\n` : summary(model, solution, notes));
 }
 
-/** Adds `exact MODEL [--out DIR] [--json] [--eta η] [--grid from:to:points] [--pairs i:j,...]`. */
+/** Adds `exact MODEL [--out DIR] [--json] [--eta η] [--grid from:to:points] [--pairs i:j,...] [--tolerance τ]`. */
 export function registerExactCommand(program: Command): void {
   program
     .command('exact')
     .description("exact reference: ground level, Green's function, self-energy and spectral function of a model")
     .argument('<model>', 'model file (JSON)')
-    .option('--out <dir>', 'write green.json, green.csv (columns omega,i,j,re,im), spectral.svg and selfenergy.svg')
+    .option('--out <dir>', 'write green.json, green.csv (columns omega,i,j,re,im,bound), spectral.svg and selfenergy.svg')
     .option('--json', 'print the result as one JSON object instead of the summary')
     .option('--eta <eta>', "broadening η > 0 (default: the model file's)")
     .option('--grid <from:to:points>', "frequency grid (default: the model file's)")
     .option('--pairs <i:j,...>', 'entries G_ij to compute (default: all n²)')
+    .option(
+      '--tolerance <tau>',
+      `continued fractions stop when their rigorous truncation bound is at most τ × max |G| (${TOLERANCE_RANGE[0]} to ${TOLERANCE_RANGE[1]}; default ${DEFAULT_GREEN_TOLERANCE})`,
+    )
     .action((file: string, options: ExactCommandOptions) => exactCommand(file, options));
 }

@@ -1,6 +1,16 @@
 /** complexInverse: inverse of a dense complex matrix by Gauss–Jordan elimination with partial pivoting. */
 import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 
+/** The matrix has no usable pivot in `column` (all candidates zero or not finite). */
+export class SingularMatrixError extends RangeError {
+  override readonly name: string = 'SingularMatrixError';
+  constructor(readonly column: number) {
+    super(`complexInverse: matrix is singular (no pivot in column ${column})`);
+  }
+}
+
+/** @throws SingularMatrixError when elimination finds no non-zero finite pivot */
+
 export function complexInverse(a: ComplexMatrix): ComplexMatrix {
   const n = a.n;
   const w = 2 * n;
@@ -23,7 +33,7 @@ export function complexInverse(a: ComplexMatrix): ComplexMatrix {
         pivot = r;
       }
     }
-    if (!(best > 0)) throw new RangeError('complexInverse: matrix is singular');
+    if (!(best > 0) || !Number.isFinite(best)) throw new SingularMatrixError(c);
     if (pivot !== c) {
       for (let k = 0; k < w; k++) {
         const tr = re[c * w + k]!;

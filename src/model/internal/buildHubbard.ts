@@ -6,6 +6,7 @@ import { latticeBonds } from './latticeBonds.js';
 import type { HubbardInput } from './modelSchemas.js';
 import { onSiteInteraction } from './onSiteInteraction.js';
 import type { Problem } from './Problem.js';
+import { MAX_MODES } from '../modelLimits.js';
 
 /** Modes: site s spin up is mode s, spin down is mode L + s (L = number of sites). */
 export function buildHubbard(input: HubbardInput, problems: Problem[]): BuiltHamiltonian | undefined {
@@ -23,6 +24,10 @@ export function buildHubbard(input: HubbardInput, problems: Problem[]): BuiltHam
   }
   if (dims.length === 0) return undefined;
   const siteCount = dims.reduce((a, b) => a * b, 1);
+  if (2 * siteCount > MAX_MODES) {
+    problems.push({ path: ['lattice'], message: `${siteCount} sites make ${2 * siteCount} modes; at most ${MAX_MODES} modes are supported` });
+    return undefined;
+  }
   const mu = input.chemicalPotential ?? 0;
   const oneBody = zeroComplexMatrix(2 * siteCount);
   const twoBody: TwoBodyTerm[] = [];

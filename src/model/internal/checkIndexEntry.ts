@@ -1,4 +1,5 @@
 // checkIndexEntry: validates one [indices..., re, im?] row of oneBody / twoBody and reads it.
+import { MAX_ENERGY } from '../modelLimits.js';
 import type { Problem } from './Problem.js';
 
 export interface IndexEntry {
@@ -29,6 +30,12 @@ export function checkIndexEntry(
       ok = false;
     } else if (index < 0 || index >= modes) {
       problems.push({ path: [field, position, slot], message: `index ${index} out of range 0..${modes - 1}` });
+      ok = false;
+    }
+  }
+  for (let slot = indexCount; slot < row.length; slot++) {
+    if (!(Math.abs(row[slot]!) <= MAX_ENERGY)) {
+      problems.push({ path: [field, position, slot], message: `must lie within ±${MAX_ENERGY}, got ${row[slot]}` });
       ok = false;
     }
   }
