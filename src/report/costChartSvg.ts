@@ -1,0 +1,41 @@
+/**
+ * costChartSvg: a log–log chart of cost against one model parameter, one line (with points) per route, drawn with
+ * vega-lite compiled to vega and rendered server side like lineChartSvg. Same input, same bytes.
+ */
+import * as vega from 'vega';
+import { compile, type TopLevelSpec } from 'vega-lite';
+
+export interface CostSeries {
+  readonly name: string;
+  readonly x: readonly number[];
+  readonly y: readonly number[];
+}
+
+export interface CostChart {
+  readonly title: string;
+  readonly xTitle: string;
+  readonly yTitle: string;
+  readonly series: readonly CostSeries[];
+}
+
+export async function costChartSvg(chart: CostChart): Promise<string> {
+  const values = chart.series.flatMap((s) => s.x.map((x, k) => ({ x, y: s.y[k]!, route: s.name })));
+  const spec: TopLevelSpec = {
+    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
+    title: chart.title,
+    width: 640,
+    height: 360,
+    background: 'white',
+    data: { values },
+    mark: { type: 'line', point: true, strokeWidth: 1.5 },
+    encoding: {
+      x: { field: 'x', type: 'quantitative', title: chart.xTitle, scale: { type: 'log' } },
+      y: { field: 'y', type: 'quantitative', title: chart.yTitle, scale: { type: 'log' } },
+      color: { field: 'route', type: 'nominal', title: 'route', sort: chart.series.map((s) => s.name) },
+    },
+  };
+  const view = new vega.View(vega.parse(compile(spec).spec), { renderer: 'none' });
+  const svg = await view.toSVG();
+  view.finalize();
+  return svg;
+}

@@ -1,0 +1,55 @@
+// polewright cost: JSON shape for both routes, the stated assumptions, the --vary sweep files, and clear errors.
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { runCli } from '../helpers/runCli.js';
+
+const dir = mkdtempSync(join(tmpdir(), 'polewright-cost-'));
+const model = join(dir, 'chain.json');
+writeFileSync(model, JSON.stringify({ lattice: { shape: 'chain', sites: 2, hopping: 1 }, interaction: 4, electrons: 2, broadening: 0.1 }));
+
+describe('polewright cost', () => {
+  it('prints both routes as JSON with the required fields', () => {
+    const result = runCli(['cost', model, '--json', '--energy', '-1.5', '--precision', '0.05']);
+    expect(result.status).toBe(0);
+    const json = JSON.parse(result.stdout);
+    for (const route of ['preconditioned', 'direct']) {
+      for (const field of ['logicalQubits', 'toffoli', 'tCount', 'rotations', 'queries', 'shots', 'alpha', 'degree', 'errorBudget']) {
+        expect(json[route]).toHaveProperty(field);
+      }
+      expect(json[route].toffoli).toBeGreaterThan(0);
+    }
+    expect(json.groundEnergySource).toBe('given');
+  });
+
+  it('says in the table that the ground-state preparation is not counted', () => {
+    const result = runCli(['cost', model]);
+    expect(result.status).toBe(0);
+    expect(result.stdout).toMatch(/preconditioned\s+direct/);
+    expect(result.stdout).toMatch(/Ground-state preparation is NOT counted/);
+    expect(result.stdout).toMatch(/lower bound/);
+  });
+
+  it('writes cost.csv and cost.svg for --vary', () => {
+    const out = join(dir, 'sweep');
+    const result = runCli(['cost', model, '--vary', 'hopping=1,10', '--out', out]);
+    expect(result.status).toBe(0);
+    const csv = readFileSync(join(out, 'cost.csv'), 'utf8').trim().split('\n');
+    expect(csv[0]).toMatch(/^hopping,route,/);
+    expect(csv).toHaveLength(5);
+    expect(readFileSync(join(out, 'cost.svg'), 'utf8')).toMatch(/^<svg/);
+  });
+
+  it('rejects an unknown --vary key, an empty value list and ε ≤ 0 with exit 2', () => {
+    const unknown = runCli(['cost', model, '--vary', 'gauge=1,2', '--out', dir]);
+    expect(unknown.status).toBe(2);
+    expect(unknown.stderr).toMatch(/--vary: unknown key "gauge"/);
+    const empty = runCli(['cost', model, '--vary', 'hopping=', '--out', dir]);
+    expect(empty.status).toBe(2);
+    expect(empty.stderr).toMatch(/value list is empty/);
+    const zero = runCli(['cost', model, '--precision', '0']);
+    expect(zero.status).toBe(2);
+    expect(zero.stderr).toMatch(/--precision must be greater than 0/);
+  });
+});
