@@ -3,7 +3,7 @@
  * operation of its body against its own qubit and parameter counts.
  */
 import { standardGate } from './standardGates.js';
-import type { Block, UnitaryOp } from './types.js';
+import type { Block, NativeKernelData, UnitaryOp } from './types.js';
 import { validateUnitaryOp } from './internal/validateOps.js';
 
 const IDENTIFIER = /^[A-Za-z_][A-Za-z0-9_]*$/;
@@ -21,6 +21,10 @@ export interface BlockOptions {
   readonly qubits: number;
   readonly params?: readonly string[];
   readonly nativeKernel?: string;
+  /** Data for the native kernel (see Block.kernelData). */
+  readonly kernelData?: NativeKernelData;
+  /** Local qubits the block returns to |0> whenever they start in |0> (see Block.workQubits). */
+  readonly workQubits?: readonly number[];
 }
 
 function checkHeader(options: BlockOptions): void {
@@ -30,6 +34,13 @@ function checkHeader(options: BlockOptions): void {
   if (!Number.isInteger(options.qubits) || options.qubits < 0) throw new RangeError(`block ${options.name}: bad qubit count`);
   for (const p of options.params ?? []) {
     if (!IDENTIFIER.test(p) || RESERVED.has(p)) throw new RangeError(`block ${options.name}: bad parameter name "${p}"`);
+  }
+  const work = options.workQubits ?? [];
+  if (new Set(work).size !== work.length || work.some((q) => !Number.isInteger(q) || q < 0 || q >= options.qubits)) {
+    throw new RangeError(`block ${options.name}: work qubits ${JSON.stringify(work)} are not distinct qubits of the block`);
+  }
+  for (const [key, values] of Object.entries(options.kernelData ?? {})) {
+    if (!values.every((v) => Number.isFinite(v))) throw new RangeError(`block ${options.name}: kernel data "${key}" is not a list of finite numbers`);
   }
 }
 
@@ -46,6 +57,8 @@ function header(options: BlockOptions): Omit<Block, 'body'> {
     params: options.params ?? [],
     qubits: options.qubits,
     ...(options.nativeKernel !== undefined ? { nativeKernel: options.nativeKernel } : {}),
+    ...(options.kernelData !== undefined ? { kernelData: options.kernelData } : {}),
+    ...(options.workQubits !== undefined && options.workQubits.length > 0 ? { workQubits: [...options.workQubits] } : {}),
   };
 }
 

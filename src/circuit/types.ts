@@ -74,7 +74,17 @@ export interface Block {
   readonly body: BlockBody;
   /** Optional id of a simulator kernel that computes the same unitary as the body in one pass. */
   readonly nativeKernel?: string;
+  /** Numbers the native kernel reads besides the call's arguments, fixed when the block is defined. */
+  readonly kernelData?: NativeKernelData;
+  /**
+   * Local work qubits: each returns to |0> whenever it starts in |0>, whatever the other qubits hold
+   * (compute/uncompute registers). A simulator may leave such a qubit out of the state.
+   */
+  readonly workQubits?: readonly number[];
 }
+
+/** Named lists of numbers (qubit indices, integer weights, angles) that a native kernel reads. */
+export type NativeKernelData = Readonly<Record<string, readonly number[]>>;
 
 export interface Register {
   readonly name: string;

@@ -1,13 +1,15 @@
 /**
- * applyCircuit: applies every unitary operation of a circuit to a state in place, streaming the
- * flattened gates (barriers are ignored; measurements and resets are refused).
+ * applyCircuit: applies every unitary operation of a circuit to a state in place, by compiling the
+ * circuit once (cached per circuit, state size and kernel choice) and replaying the program
+ * (barriers are ignored; measurements and resets are refused).
  */
 import { qubitCount } from '../circuit/CircuitBuilder.js';
 import type { Circuit } from '../circuit/types.js';
 import type { SimulationOptions } from './SimulationOptions.js';
 import type { StateVector } from './StateVector.js';
-import { applyUnitaryStream } from './internal/applyFlatOps.js';
-import { flattenForSimulation } from './internal/flattenForSimulation.js';
+import { compileCircuit } from './internal/compileProgram.js';
+import { kernelLookup } from './internal/kernelLookup.js';
+import { runProgram } from './internal/runProgram.js';
 
 /**
  * Applies `circuit` to `state` (which may have more qubits than the circuit; the circuit acts on
@@ -17,5 +19,6 @@ import { flattenForSimulation } from './internal/flattenForSimulation.js';
 export function applyCircuit(state: StateVector, circuit: Circuit, options: SimulationOptions = {}): void {
   const needed = qubitCount(circuit);
   if (state.qubits < needed) throw new RangeError(`applyCircuit: the circuit has ${needed} qubits, the state only ${state.qubits}`);
-  applyUnitaryStream(state, flattenForSimulation(circuit, options), 'applyCircuit');
+  const program = compileCircuit(circuit, { stateQubits: state.qubits, kernels: kernelLookup(options) }, 'applyCircuit');
+  runProgram(program, state);
 }

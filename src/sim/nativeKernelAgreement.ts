@@ -7,7 +7,8 @@ import type { Block } from '../circuit/types.js';
 import { seededRandom } from '../core/seededRandom.js';
 import { StateVector } from './StateVector.js';
 import { applyUnitaryOps } from './applyUnitaryOps.js';
-import { nativeKernels } from './internal/nativeKernelRegistry.js';
+import type { NativeKernelTable } from './NativeKernelSpec.js';
+import { kernelLookup } from './internal/kernelLookup.js';
 
 export interface NativeKernelAgreementOptions {
   /** Angle arguments of the call (default: none). */
@@ -24,14 +25,17 @@ export interface NativeKernelAgreementOptions {
   readonly spectators?: number;
   /** Seed of the random state and the qubit placement (default 1). */
   readonly seed?: number;
+  /** Kernel table consulted before the process-wide registry (as SimulationOptions.nativeKernels). */
+  readonly nativeKernels?: NativeKernelTable;
 }
 
 /**
  * Returns max_i |(K ψ)_i − (D ψ)_i| where K applies the call with the native kernel and D with the
- * block's decomposition. Throws RangeError when the block names no registered kernel.
+ * block's decomposition. Throws RangeError when the block names no kernel in the table or the registry.
  */
 export function nativeKernelAgreement(block: Block, options: NativeKernelAgreementOptions = {}): number {
-  if (block.nativeKernel === undefined || !nativeKernels.has(block.nativeKernel)) {
+  const table = options.nativeKernels === undefined ? {} : { nativeKernels: options.nativeKernels };
+  if (kernelLookup(table).find(block) === undefined) {
     throw new RangeError(`nativeKernelAgreement: block ${block.name} has no registered native kernel`);
   }
   const controls = options.controls ?? 0;
@@ -53,7 +57,7 @@ export function nativeKernelAgreement(block: Block, options: NativeKernelAgreeme
     inverse: options.inverse ?? false,
     power: options.power ?? 1,
   });
-  applyUnitaryOps(native, [op], { useNativeKernels: true });
+  applyUnitaryOps(native, [op], { ...table, useNativeKernels: true });
   applyUnitaryOps(decomposed, [op], { useNativeKernels: false });
   let worst = 0;
   for (let i = 0; i < native.re.length; i++) {

@@ -2,8 +2,9 @@
  * registerNativeKernel: adds a kernel to the registry the simulator consults for blocks that name
  * a `nativeKernel` id; such a block is then applied in one pass instead of gate by gate.
  */
+import type { NativeKernelSpec } from './NativeKernelSpec.js';
 import type { StateVector } from './StateVector.js';
-import { nativeKernels } from './internal/nativeKernelRegistry.js';
+import { nativeKernels, registryChanges } from './internal/nativeKernelRegistry.js';
 
 /**
  * Applies a block to `state` on the global `qubits` (the block's local qubit k is qubits[k]), with
@@ -21,8 +22,13 @@ export type NativeKernel = (
   power: number,
 ) => void;
 
-/** Registers `kernel` under `id`; throws RangeError when the id is already taken. */
-export function registerNativeKernel(id: string, kernel: NativeKernel): void {
+/**
+ * Registers `kernel` (a function, or a NativeKernelSpec prepared once per call site) under `id`
+ * process-wide; throws RangeError when the id is already taken. Prefer passing a table through
+ * SimulationOptions.nativeKernels, which needs no global state.
+ */
+export function registerNativeKernel(id: string, kernel: NativeKernel | NativeKernelSpec): void {
   if (nativeKernels.has(id)) throw new RangeError(`registerNativeKernel: kernel "${id}" is already registered`);
   nativeKernels.set(id, kernel);
+  registryChanges.count += 1;
 }

@@ -19,15 +19,20 @@ describe('polewright check MODEL', () => {
     expect(result.stdout).not.toContain('FAIL');
   });
 
-  it('--json prints { ok, blocks[label, systemQubits, ancillaQubits, alpha, maxError, errorBound, gates] }', () => {
+  it('--json prints { ok, z, tolerance, precision, E0, blocks[label, …, passed, method, verdict] }', () => {
     const result = runCli(['check', MODEL, '--json']);
     expect(result.status).toBe(0);
     const report = JSON.parse(result.stdout);
-    expect(report.ok).toBe(true);
+    expect(Object.keys(report)).toEqual(['ok', 'z', 'tolerance', 'precision', 'E0', 'blocks']);
+    expect(report).toMatchObject({ ok: true, z: { re: 0, im: 0.1 }, tolerance: 1e-10, precision: 1e-3 });
     expect(report.blocks).toHaveLength(3 * 2 + 6 + 4);
     for (const block of report.blocks) {
-      expect(Object.keys(block)).toEqual(['label', 'systemQubits', 'ancillaQubits', 'alpha', 'maxError', 'errorBound', 'gates', 'costNotes']);
+      expect(Object.keys(block)).toEqual([
+        'label', 'systemQubits', 'ancillaQubits', 'alpha', 'maxError', 'errorBound', 'gates', 'costNotes', 'passed', 'method', 'verdict',
+      ]);
+      expect(block).toMatchObject({ passed: true, verdict: 'pass' });
       expect(block.maxError).toBeLessThanOrEqual(Math.max(1e-10, block.errorBound));
+      expect(block.errorBound).toBeLessThanOrEqual(1e-3);
     }
     // The fast inverse's α = 1/c never exceeds 1/η (default z = grid midpoint + iη, η = 0.1 in this model).
     for (const label of ['fast inverse (particle)', 'fast inverse (hole)']) {
@@ -43,7 +48,19 @@ describe('polewright check MODEL', () => {
   it('exits 1 when a block exceeds the tolerance', () => {
     const result = runCli(['check', MODEL, '--json', '--tolerance', '1e-300']);
     expect(result.status).toBe(1);
-    expect(JSON.parse(result.stdout).ok).toBe(false);
+    const report = JSON.parse(result.stdout);
+    expect(report.ok).toBe(false);
+    expect(report.blocks.some((b: { verdict: string }) => b.verdict === 'fail')).toBe(true);
+  });
+
+  it('exits 1 and marks the fast inverses INCONCLUSIVE when their bound exceeds --precision, stated in the table', () => {
+    // The fast-inverse bounds carry a floating-point term of order 1e-12, above a precision of 1e-14.
+    const result = runCli(['check', MODEL, '--precision', '1e-14']);
+    expect(result.status).toBe(1);
+    expect(result.stdout).toMatch(/precision 1e-14/);
+    expect(result.stdout).toMatch(/^fast inverse \(particle\)\s.*INCONCLUSIVE$/m);
+    expect(result.stdout).toMatch(/fast inverse \(particle\): INCONCLUSIVE: bound .* exceeds the precision 1e-14/);
+    expect(result.stdout).not.toContain('FAIL');
   });
 
   it('exits 2 with a message naming the problem for bad input', () => {
@@ -60,5 +77,10 @@ describe('polewright check MODEL', () => {
     const z = runCli(['check', MODEL, '--z', '0.5,-0.1']);
     expect(z.status).toBe(2);
     expect(z.stderr).toMatch(/--z/);
+    for (const precision of ['0', '1', 'abc', '-1e-3']) {
+      const bad = runCli(['check', MODEL, '--precision', precision]);
+      expect(bad.status).toBe(2);
+      expect(bad.stderr).toMatch(/--precision/);
+    }
   });
 });

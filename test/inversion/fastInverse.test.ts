@@ -56,11 +56,15 @@ describe('fastInverse(T, w)', () => {
     expect(encoding.c).toBe(0.5);
   });
 
-  it('caps the register at maxBits and says so, the bound still holding', () => {
-    const T = { n: 2, re: new Float64Array([0.3, 0.1, 0.1, -0.7]), im: new Float64Array(4) };
-    const encoding = fastInverse(T, { re: 0.1, im: 0.2 }, { precision: 1e-4, maxBits: 3 });
+  it('caps the register at maxBits and says so, the bound still holding and above the precision', () => {
+    // Four irrational levels with many electrons: a 2-bit register cannot tell the window's energies apart.
+    const levels = [0.3, -0.7 * Math.SQRT2, 0.1 * Math.PI, 0.55];
+    const T = { n: 4, re: new Float64Array(16), im: new Float64Array(16) };
+    levels.forEach((e, k) => (T.re[k * 4 + k] = e));
+    const encoding = fastInverse(T, { re: 0.1, im: 0.2 }, { precision: 1e-4, maxBits: 2 });
     expect(encoding.bitsCapped).toBe(true);
-    expect(encoding.registerBits).toBeLessThanOrEqual(3);
+    expect(encoding.registerBits).toBeLessThanOrEqual(2);
+    expect(encoding.quantisationBound).toBeGreaterThan(1e-4);
     expect(verifyEncoding(encoding).maxError).toBeLessThanOrEqual(encoding.quantisationBound + 1e-10);
   });
 

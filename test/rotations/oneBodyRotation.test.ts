@@ -61,6 +61,21 @@ describe('oneBodyRotation(T)', () => {
     expect(oneBodyRotation(ring(4, 1, 0), { method: 'givens' }).method).toBe('givens');
   });
 
+  it('reports residual ≥ ‖T − V diag(ε) V†‖: rounding level when exact, the deviation when T is circulant only within tolerance', () => {
+    for (const [n, seed] of [[3, 2], [5, 3]] as const) {
+      const T = randomHermitian(n, seed);
+      const result = oneBodyRotation(T);
+      expect(result.residual).toBeGreaterThan(0);
+      expect(result.residual).toBeLessThan(1e-12);
+    }
+    expect(oneBodyRotation(ring(4, 1, 0.3)).residual).toBeLessThan(1e-12);
+    // One bond of a 4-site ring changed by 4e-11 (both T_01 and T_10): ‖T − C‖_F = 4e-11·√2 for the circulant C of row 0.
+    const near = matrixFromRows([[0, -1 - 4e-11, 0, -1], [-1 - 4e-11, 0, -1, 0], [0, -1, 0, -1], [-1, 0, -1, 0]]);
+    const result = oneBodyRotation(near, { fourierBlocks: 1 });
+    expect(result.method).toBe('fourier');
+    expect(result.residual).toBeGreaterThanOrEqual(4e-11 * Math.SQRT2 * (1 - 1e-3));
+  });
+
   it('throws RangeErrors for non-Hermitian T and for method "fourier" on a non-ring', () => {
     expect(() => oneBodyRotation(matrixFromRows([[0, [0, 1]], [[0, 1], 0]]))).toThrow(/oneBodyRotation: T is not Hermitian/);
     const chain = hubbard({ sites: 4, hopping: 1, interaction: 0, chemicalPotential: 0 }).oneBody;

@@ -1,5 +1,9 @@
 // energyGrid: the fixed-point grid of the energy register — step Δ, per-mode offset, integer weights a_k, the reachable
-// range of Σ a_k n_k in the electron-number window, the register width, and the rounding errors ε_k − ε̃_k.
+// range of Σ a_k n_k in the electron-number window, the register width — chosen so that the register's rounding and an
+// inexact diagonalisation stay within the precision asked for, with the energies every register value stands for.
+import { registerEnergies, type RegisterEnergies } from './flagAmplitude.js';
+import { registerHull } from './registerHull.js';
+import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 
 export interface EnergyGrid {
   /** Δ, a power of two. */
@@ -13,12 +17,12 @@ export interface EnergyGrid {
   readonly sumMax: number;
   /** Register width m: 2^m > sumMax − sumMin. */
   readonly bits: number;
-  /** True when every |ε_k − ε̃_k| ≤ 1e-12 on a power-of-two grid (no rounding to speak of). */
+  /** True when every register value that occurs stands for one energy (no rounding to speak of). */
   readonly commensurate: boolean;
   /** True when maxBits forced a coarser grid than the precision asked for. */
   readonly capped: boolean;
-  /** δ ≥ max over window occupations of |Σ_k (ε_k − ε̃_k) n_k|: the sum of the N_max largest |ε_k − ε̃_k|. */
-  readonly roundingDelta: number;
+  /** The energies per register value, c and the rounding and decomposition bounds at w. */
+  readonly values: RegisterEnergies;
 }
 
 /** Electron-number window [min, max]. */
@@ -27,7 +31,18 @@ export interface Window {
   readonly max: number;
 }
 
+export interface GridTarget {
+  /** Target for the rounding + decomposition part of the bound (the flag rotation's pruning gets the same again). */
+  readonly budget: number;
+  readonly w: ComplexScalar;
+  readonly maxBits: number;
+  /** ρ ≥ ‖A − A'‖ on the window (A' the operator the rotation diagonalises exactly). */
+  readonly rho: number;
+}
+
 const COMMENSURATE_TOLERANCE = 1e-12;
+/** Largest (N, partial sum) table registerHull may fill: 2^22 entries (64 MiB for its two tables). */
+const HULL_TABLE_LIMIT = 2 ** 22;
 
 function rangeOf(weights: readonly number[], window: Window): { sumMin: number; sumMax: number } {
   const ascending = [...weights].sort((x, y) => x - y);
@@ -46,34 +61,64 @@ function rangeOf(weights: readonly number[], window: Window): { sumMin: number; 
   return { sumMin, sumMax };
 }
 
-function gridFor(energies: Float64Array, window: Window, step: number, offset: number, commensurate: boolean, capped: boolean): EnergyGrid {
+/** The register fits maxBits and registerHull's table fits HULL_TABLE_LIMIT. */
+function fits(layout: Layout, window: Window, maxBits: number): boolean {
+  const span = Math.max(...layout.weights) - Math.min(...layout.weights);
+  return layout.bits <= maxBits && (window.max + 1) * (window.max * span + 1) <= HULL_TABLE_LIMIT;
+}
+
+interface Layout {
+  readonly step: number;
+  readonly modeOffset: number;
+  readonly weights: number[];
+  readonly sumMin: number;
+  readonly sumMax: number;
+  readonly bits: number;
+}
+
+function layoutFor(energies: Float64Array, window: Window, step: number, offset: number): Layout {
   const weights = Array.from(energies, (e) => Math.round((e - offset) / step));
   const { sumMin, sumMax } = rangeOf(weights, window);
   const bits = Math.max(1, Math.ceil(Math.log2(sumMax - sumMin + 1)));
-  const errors = Array.from(energies, (e, k) => Math.abs(e - offset - step * weights[k]!)).sort((x, y) => y - x);
-  const roundingDelta = errors.slice(0, window.max).reduce((s, x) => s + x, 0);
-  return { step, modeOffset: offset, weights, sumMin, sumMax, bits, commensurate, capped, roundingDelta };
+  return { step, modeOffset: offset, weights, sumMin, sumMax, bits };
+}
+
+function complete(energies: Float64Array, window: Window, layout: Layout, target: GridTarget, capped: boolean): EnergyGrid {
+  const hull = registerHull(energies, layout.weights, window, layout.sumMin, layout.sumMax - layout.sumMin);
+  const values = registerEnergies(hull, target.w, target.rho);
+  return { ...layout, commensurate: values.exact, capped, values };
 }
 
 /**
- * The coarsest power-of-two grid on which all ε_k (after a common offset when the window is one electron number) are
- * integer multiples within 1e-12 and that fits maxBits; else the step 2^⌊log2(precision·η/N_max)⌋ (so that
- * N_max·Δ/2 ≤ precision·η/2), doubled until the register fits maxBits.
+ * First the coarsest power-of-two grid on which all ε_k (after a common offset when the window is one electron number)
+ * are integer multiples within 1e-12 and that fits maxBits (every value then stands for one energy). Else grids from
+ * coarse to fine: the first whose rounding + decomposition bound at w is ≤ budget; when none fits maxBits (and the
+ * hull table its limit), the finest that does, marked `capped`.
  */
-export function energyGrid(energies: Float64Array, window: Window, precision: number, eta: number, maxBits: number): EnergyGrid {
+export function energyGrid(energies: Float64Array, window: Window, target: GridTarget): EnergyGrid {
   const offsets = window.min === window.max && energies.length > 0 ? [0, energies[0]!] : [0];
+  const spreadOf = (offset: number): number => Math.max(0, ...Array.from(energies, (e) => Math.abs(e - offset)));
   for (const offset of offsets) {
-    const spread = Math.max(0, ...Array.from(energies, (e) => Math.abs(e - offset)));
-    if (spread === 0) return gridFor(energies, window, 1, offset, true, false);
+    const spread = spreadOf(offset);
+    if (spread === 0) return complete(energies, window, layoutFor(energies, window, 1, offset), target, false);
     for (let j = -Math.ceil(Math.log2(spread)); j <= 60; j++) {
-      const grid = gridFor(energies, window, 2 ** -j, offset, true, false);
-      if (grid.bits > maxBits) break;
-      const exact = Array.from(energies).every((e, k) => Math.abs(e - offset - grid.step * grid.weights[k]!) <= COMMENSURATE_TOLERANCE);
-      if (exact) return grid;
+      const layout = layoutFor(energies, window, 2 ** -j, offset);
+      if (!fits(layout, window, target.maxBits)) break;
+      const exact = Array.from(energies).every((e, k) => Math.abs(e - offset - layout.step * layout.weights[k]!) <= COMMENSURATE_TOLERANCE);
+      if (exact) return complete(energies, window, layout, target, false);
     }
   }
-  const target = (precision * eta) / Math.max(1, window.max);
-  let grid = gridFor(energies, window, 2 ** Math.floor(Math.log2(target)), 0, false, false);
-  while (grid.bits > maxBits) grid = gridFor(energies, window, grid.step * 2, 0, false, true);
-  return grid;
+  const offset = offsets[offsets.length - 1]!;
+  let finest: EnergyGrid | null = null;
+  for (let j = -Math.ceil(Math.log2(spreadOf(offset))); j <= 60; j++) {
+    const layout = layoutFor(energies, window, 2 ** -j, offset);
+    if (!fits(layout, window, target.maxBits)) break;
+    finest = complete(energies, window, layout, target, false);
+    if (finest.values.rounding + finest.values.decomposition <= target.budget) return finest;
+  }
+  if (finest !== null) return { ...finest, capped: true };
+  const coarsest = layoutFor(energies, window, 2 ** Math.ceil(Math.log2(spreadOf(offset) || 1)), offset);
+  let layout = coarsest;
+  while (!fits(layout, window, target.maxBits)) layout = layoutFor(energies, window, layout.step * 2, offset);
+  return complete(energies, window, layout, target, true);
 }

@@ -4,7 +4,7 @@
 import { gate } from '../../circuit/ops.js';
 import type { UnitaryOp } from '../../circuit/types.js';
 import { multiplexedRotation } from '../../blocks/multiplexedRotation.js';
-import { flagAngles, type RegisterEnergies } from './flagAmplitude.js';
+import { flagAngles, occupied, type RegisterEnergies } from './flagAmplitude.js';
 import { flagIntervals } from './flagIntervals.js';
 
 export interface FlagRotation {
@@ -30,7 +30,7 @@ export function flagRotationOps(
     const thetas: number[] = [];
     const lambdas: number[] = [];
     for (let v = 0; v < 2 ** m; v++) {
-      const { theta, lambda } = v <= energies.top ? flagAngles(energies, v) : { theta: 0, lambda: 0 };
+      const { theta, lambda } = occupied(energies, v) ? flagAngles(energies, v) : { theta: 0, lambda: 0 };
       thetas.push(theta);
       lambdas.push(lambda);
     }

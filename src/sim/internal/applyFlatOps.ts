@@ -1,23 +1,32 @@
 /**
  * applyUnitaryStream: applies a stream of flat unitary operations (gates and whole native blocks)
- * to a state; barriers are skipped, measurements and resets are refused (they are not unitary).
+ * to a state without compiling the whole stream (the path of measured circuits, where every
+ * branch sees the ops one at a time); barriers are skipped, measurements and resets are refused.
+ * A native block is compiled as one call (cached), so its kernel is prepared once.
  */
 import type { FlatOp } from '../../circuit/flatten.js';
 import { InputError } from '../../core/InputError.js';
+import type { SimulationOptions } from '../SimulationOptions.js';
 import type { StateVector } from '../StateVector.js';
 import { applyFlatGate } from './applyFlatGate.js';
-import { nativeKernels } from './nativeKernelRegistry.js';
+import { compileCall } from './compileProgram.js';
+import { kernelLookup } from './kernelLookup.js';
+import { makeProgram, type Step } from './Program.js';
+import { runProgram } from './runProgram.js';
 
-export function applyUnitaryStream(state: StateVector, ops: Iterable<FlatOp>, what: string): void {
+export function applyUnitaryStream(state: StateVector, ops: Iterable<FlatOp>, what: string, options: SimulationOptions = {}): void {
+  const kernels = kernelLookup(options);
   for (const op of ops) {
     switch (op.kind) {
       case 'gate':
         applyFlatGate(state, op);
         break;
       case 'native': {
-        const kernel = nativeKernels.get(op.block.nativeKernel ?? '');
-        if (!kernel) throw new RangeError(`${what}: no native kernel "${op.block.nativeKernel}" for block ${op.block.name}`);
-        kernel(state, op.qubits, op.args, op.controls, op.negControls, op.inverse, op.power);
+        if (!kernels.find(op.block)) throw new RangeError(`${what}: no native kernel "${op.block.nativeKernel}" for block ${op.block.name}`);
+        const steps: Step[] = [];
+        const site = { bits: op.qubits, controls: op.controls, negControls: op.negControls, inverse: op.inverse, times: op.power };
+        compileCall(op.block, op.args, site, { stateQubits: state.qubits, kernels }, steps);
+        runProgram(makeProgram(steps, state.qubits), state);
         break;
       }
       case 'barrier':

@@ -86,7 +86,7 @@ export function branchOutcomes(circuit: Circuit, qubits: number, bits: number, s
       const bit = op.kind === 'measure' ? op.bit : -1;
       branches = branches.flatMap((branch, k) => split(branch, weights[k] as [number, number], op.qubit, bit, op.kind === 'reset', options));
     } else {
-      for (const branch of branches) applyUnitaryStream(branch.state, [op], 'outcomeDistribution');
+      for (const branch of branches) applyUnitaryStream(branch.state, [op], 'outcomeDistribution', options);
     }
   }
   const outcomes = new Map<string, number>();

@@ -18,7 +18,7 @@ function* unitaryPart(ops: Iterable<FlatOp>): Generator<FlatOp> {
 
 export function directOutcomes(circuit: Circuit, qubits: number, bitSources: Int32Array, options: SimulationOptions): Map<string, number> {
   const state = StateVector.zero(qubits, options);
-  applyUnitaryStream(state, unitaryPart(flattenForSimulation(circuit, options)), 'outcomeDistribution');
+  applyUnitaryStream(state, unitaryPart(flattenForSimulation(circuit, options)), 'outcomeDistribution', options);
   const measured = [...new Set([...bitSources].filter((q) => q >= 0))].sort((a, b) => a - b);
   ensureFits(8 * 2 ** measured.length, `the distribution of ${measured.length} measured qubits`, options.memoryLimitBytes);
   const marginal = probabilities(state, measured);

@@ -19,7 +19,7 @@ export function trajectoryOutcomes(circuit: Circuit, qubits: number, bits: numbe
     const record = new Uint8Array(bits);
     for (const op of flattenForSimulation(circuit, options)) {
       if (op.kind !== 'measure' && op.kind !== 'reset') {
-        applyUnitaryStream(state, [op], 'outcomeDistribution');
+        applyUnitaryStream(state, [op], 'outcomeDistribution', options);
         continue;
       }
       const one = weightOfOne(state, op.qubit);

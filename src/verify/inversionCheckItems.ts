@@ -1,0 +1,59 @@
+/**
+ * inversionCheckItems: the four inversion rows of `polewright check` (inversionCheckEncodings) paired with references built
+ * from the model's fermion terms — P_N (w − A)⁻¹ P_N by sector-wise Gauss–Jordan inversion of A's Fock matrix for the fast
+ * inverses, w − H by applying H's ladder terms for the direct shifts — and, for the fast inverses, the system columns to
+ * check above 12 qubits: every basis state of the row's electron number plus one of every other number (where that is
+ * cheap enough; else random probes).
+ */
+import { ancillaQubits } from '../blocks/BlockEncoding.js';
+import { inversionCheckEncodings, type InversionCheckOptions, type InversionCheckRow } from '../inversion/inversionCheckEncodings.js';
+import type { ComplexScalar } from '../linalg/ComplexScalar.js';
+import type { FermionModel } from '../model/FermionModel.js';
+import type { CheckItem } from './checkModelBlocks.js';
+import { fockReference } from './checkModelBlocks.js';
+import { fockOperatorMatrix, MAX_DENSE_FOCK_MODES, modelFockTerms, type FockTerm } from './internal/fockOperatorMatrix.js';
+import { sectorResolvent } from './internal/sectorResolvent.js';
+import { denseReference } from './verifyEncoding.js';
+
+/** Up to this width verifyEncoding checks every column anyway. */
+const EXHAUSTIVE_LIMIT = 12;
+/** Largest simulated amplitude count (columns × 2^width) for which the fast-inverse rows are checked column by column. */
+export const COLUMN_CHECK_BUDGET = 2 ** 22;
+
+function popcount(x: number): number {
+  let count = 0;
+  for (let v = x; v !== 0; v &= v - 1) count++;
+  return count;
+}
+
+/** Every basis state with N electrons, then the first basis state of each other electron number. */
+export function sectorColumns(modes: number, N: number): number[] {
+  const inside: number[] = [];
+  const others = new Map<number, number>();
+  for (let s = 0; s < 2 ** modes; s++) {
+    const count = popcount(s);
+    if (count === N) inside.push(s);
+    else if (!others.has(count)) others.set(count, s);
+  }
+  return [...inside, ...others.values()];
+}
+
+function shiftTerms(model: FermionModel, w: ComplexScalar): FockTerm[] {
+  return [{ factors: [], re: w.re, im: w.im }, ...modelFockTerms(model, 'all').map((t) => ({ ...t, re: -t.re, im: -t.im }))];
+}
+
+function itemFor(model: FermionModel, row: InversionCheckRow): CheckItem {
+  const n = model.modes;
+  if (row.electrons === null) return { encoding: row.encoding, reference: () => fockReference(shiftTerms(model, row.w), n) };
+  if (n > MAX_DENSE_FOCK_MODES) return { encoding: row.encoding };
+  const N = row.electrons;
+  const reference = () => denseReference(sectorResolvent(fockOperatorMatrix(modelFockTerms(model, 'A'), n), row.w, { min: N, max: N }));
+  const columns = sectorColumns(n, N);
+  const width = n + ancillaQubits(row.encoding);
+  const byColumns = width > EXHAUSTIVE_LIMIT && columns.length * 2 ** width <= COLUMN_CHECK_BUDGET;
+  return byColumns ? { encoding: row.encoding, reference, columns } : { encoding: row.encoding, reference };
+}
+
+export function inversionCheckItems(model: FermionModel, options: InversionCheckOptions): CheckItem[] {
+  return inversionCheckEncodings(model, options).map((row) => itemFor(model, row));
+}
