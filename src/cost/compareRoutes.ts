@@ -1,6 +1,7 @@
 /**
- * compareRoutes: the cost of G_ij(z) on both routes for one model, plus every assumption the figures rest on, written
- * out for the user. Never solves the model: E0 is the caller's or the rigorous Pauli lower bound (groundEnergyBound).
+ * compareRoutes: the cost of G_ij(z) on both routes for one model (a route that cannot be costed says why), plus every
+ * assumption the figures rest on, written out for the user. Never solves the model: E0 is the caller's or the rigorous
+ * Pauli lower bound (groundEnergyBound).
  */
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
@@ -8,7 +9,7 @@ import type { OverrideRuleOptions } from './collectOverrides.js';
 import { routeBuilder, type RouteName } from './costRoutes.js';
 import type { DecompositionOptions } from './decompositionTable.js';
 import { DEFAULT_SHARES } from './errorBudget.js';
-import { greenCost, type GreenCost } from './greenCost.js';
+import { greenCost, type GreenCost, type UnavailableRoute } from './greenCost.js';
 import { groundEnergyBound } from './groundEnergyBound.js';
 import { ROTATION_SYNTHESIS_SOURCE } from './rotationSynthesis.js';
 import { AMPLITUDE_ESTIMATION_SOURCE } from './shotCount.js';
@@ -24,7 +25,7 @@ export interface CompareOptions extends DecompositionOptions, OverrideRuleOption
 }
 
 export interface RouteComparison {
-  readonly routes: Readonly<Record<RouteName, GreenCost>>;
+  readonly routes: Readonly<Record<RouteName, GreenCost | UnavailableRoute>>;
   readonly groundEnergy: number;
   readonly groundEnergySource: 'given' | 'lower bound';
   readonly assumptions: readonly string[];
@@ -35,7 +36,7 @@ export const ROUTES: readonly RouteName[] = ['preconditioned', 'direct'];
 export function compareRoutes(model: FermionModel, options: CompareOptions): RouteComparison {
   const given = options.energy !== undefined;
   const groundEnergy = options.energy ?? groundEnergyBound(model);
-  const cost = (route: RouteName): GreenCost =>
+  const cost = (route: RouteName): GreenCost | UnavailableRoute =>
     greenCost({ ...options, model, groundEnergy, build: routeBuilder(model, route) });
   const routes = { preconditioned: cost('preconditioned'), direct: cost('direct') };
   const toffoliT = options.toffoliT ?? 4;
@@ -46,12 +47,12 @@ export function compareRoutes(model: FermionModel, options: CompareOptions): Rou
     options.prepToffoli === undefined
       ? 'Ground-state preparation is NOT counted (give --prep-toffoli N to add N Toffolis per run).'
       : `Ground-state preparation: ${options.prepToffoli} Toffolis per run, as given.`,
-    `Error budget on |dG|: encoding (polynomial + register quantisation) ${DEFAULT_SHARES.encoding}, rotation synthesis ${DEFAULT_SHARES.synthesis}, sampling ${DEFAULT_SHARES.sampling} of epsilon; each split evenly over the particle and hole parts (and Re/Im for sampling).`,
+    `Error budget on |dG|: encoding (the resolvent's rigorous bound: polynomial, fast-inverse quantisation carried through the inverse) ${DEFAULT_SHARES.encoding}, rotation synthesis ${DEFAULT_SHARES.synthesis}, sampling ${DEFAULT_SHARES.sampling} of epsilon; each split evenly over the particle and hole parts (and Re/Im for sampling).`,
     `Rotations: T per rotation = ceil(3 log2(1/eps_rot) + log2 log2(1/eps_rot) + 4) (${ROTATION_SYNTHESIS_SOURCE}; the +log log + 4 is our allowance).`,
     `Toffoli = ${toffoliT} T (${toffoliT === 4 ? 'measurement-based uncomputation, Jones 2013 / Gidney 2018' : 'Amy et al. 2013'}); multi-controlled gates: ${options.multiControl ?? 'measured'} ladder (src/cost/decompositionTable.ts).`,
     'SELECT of every LCU costed by unary iteration (Babbush et al. 2018), L - 1 Toffolis; PREPARE as simulated (uniformly controlled rotations).',
     `Shots: plain sampling ceil(alpha^2/eps_s^2) per test (one standard error); amplitude estimation 2M + 1 controlled-U calls with M from ${AMPLITUDE_ESTIMATION_SOURCE} (success probability 8/pi^2).`,
-    'QSVT degrees are the Childs-Kothari-Somma truncation bound; ||(w - H)^-1|| <= 1/eta; ||B|| <= Pauli 1-norm of B.',
+    "Circuits are the resolvent stage's own (src/resolvent/resolventCost.ts): the real QSVT sequence with placeholder phases (counted as arbitrary rotations), its degree the Childs-Kothari-Somma truncation bound (an upper bound on the built degree), times the fast inverse on the preconditioned route; K and delta from ||(w - H)^-1|| <= 1/eta and ||B|| <= Pauli 1-norm of B.",
   ];
   return { routes, groundEnergy, groundEnergySource: given ? 'given' : 'lower bound', assumptions };
 }

@@ -1,102 +1,82 @@
 /**
- * costRoutes: the two routes to (w − H)⁻¹ as cost models built from the existing blocks, for sizes no simulator reaches.
- * `direct`: QSVT inversion of the LCU of w − H (α_D = |w| + α_H); σ_min(w − H) ≥ |Im w| = η, so δ = η/α_D.
- * `preconditioned`: (w − H)⁻¹ = M⁻¹ R_A with R_A = (w − A)⁻¹ (fastInverse, α_F = 1/c ≤ 1/η), K = R_A B, M = 1 − K
- * (α_M = 1 + α_F α_B); M⁻¹ = 1 + (w − H)⁻¹ B gives ‖M⁻¹‖ ≤ κ = 1 + ‖B‖/η with ‖B‖ ≤ α_B (B's Pauli 1-norm), so
- * δ = 1/(α_M κ) does not depend on ‖A‖. Degrees are the Childs–Kothari–Somma bound (qsvt/inverseDegreeBound); the QSVT is the
- * counting-only sequence (qsvtSequence). Errors: the polynomial gets half the precision; on the preconditioned route the
- * fast inverse's rigorous bound, carried through M⁻¹ to first order (κ(1 + κ α_B α_F) times α_F·its bound), the other half.
+ * costRoutes: the two routes to (w − H)⁻¹ as the cost stage takes them — the resolvent stage's own plan and circuit
+ * (resolventCost: the QSVT sequence with placeholder phases of the truncation-bound degree, times the fast inverse on the
+ * preconditioned route) with its rigorous error bound. The cost stage's target is an error in operator units (on G), the
+ * resolvent's precision is in projected-block units, ε = target/α, and α depends (weakly, through the fast inverse) on ε:
+ * so the plan is redone with ε scaled by target/bound until its bound in operator units meets the target (at most
+ * MAX_PLANS plans). When the fast inverse at its register cap cannot reach that precision the route is costed at the
+ * smallest precision it can reach, and says so; when it reaches none the route is unavailable, with the reason.
  */
-import type { BlockEncoding } from '../blocks/BlockEncoding.js';
-import { pauliLcu } from '../blocks/builders/pauliLcu.js';
-import { productEncoding } from '../blocks/combine/productEncoding.js';
-import { shiftedEncoding } from '../blocks/combine/shiftedEncoding.js';
-import { directShift } from '../inversion/directShift.js';
-import { fastInverse } from '../inversion/fastInverse.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
-import { jordanWigner } from '../operators/jordanWigner.js';
-import { modelHamiltonian } from '../operators/modelHamiltonian.js';
-import { inverseDegreeBound } from '../qsvt/inverseDegreeBound.js';
-import type { RouteResolvent } from './greenCost.js';
-import { qsvtSequence } from './internal/qsvtSequence.js';
+import { resolventCost, type ResolventCost } from '../resolvent/resolventCost.js';
+import type { ResolventRoute } from '../resolvent/ResolventReport.js';
+import { UnreachablePrecisionError } from '../resolvent/UnreachablePrecisionError.js';
+import type { ResolventBuilder, RouteResolvent } from './greenCost.js';
 
-export type RouteName = 'preconditioned' | 'direct';
+export type RouteName = ResolventRoute;
 
 export interface RouteOptions {
-  /** Allowed operator-norm error of the encoded (w − H)⁻¹. */
+  /** Allowed operator-norm error of the encoded (w − H)⁻¹ (its bound times α). */
   readonly precision: number;
-  /** Electron number of the sector the resolvent acts on. */
+  /** Electron number of the sector the resolvent acts on (the preconditioned route's window). */
   readonly electrons: number;
 }
 
-const FAST_INVERSE_PRECISION_RANGE: readonly [number, number] = [1e-12, 1e-3];
+const MAX_PLANS = 4;
+/** Largest projected-block precision asked of the plan (it needs ε < 1). */
+const MAX_BLOCK_PRECISION = 0.5;
+/** Aim this far below the target when re-planning, so a slightly larger α after re-planning still meets it. */
+const REPLAN_MARGIN = 0.98;
 
-function inverted(encoding: BlockEncoding, delta: number, epsilon: number, outerAlpha: number, label: string): { sequence: BlockEncoding; degree: number } {
-  const clampedEpsilon = Math.min(epsilon, 0.5);
-  const degree = inverseDegreeBound(delta, clampedEpsilon);
-  // p ≈ (δ/2)/x has |p| ≤ 1/2 on [−1, 1] (CKS scaling), so the sequence encodes M⁻¹ with α = 2/(α_M δ) (times outer factors).
-  return { sequence: qsvtSequence(encoding, degree, outerAlpha, 0, label), degree };
+function plan(model: FermionModel, w: ComplexScalar, route: RouteName, options: RouteOptions): ResolventCost {
+  const window = route === 'preconditioned' ? { electrons: options.electrons } : {};
+  const at = (precision: number): ResolventCost => resolventCost(model, w, { route, precision, reachablePrecision: true, ...window });
+  let epsilon = Math.min(MAX_BLOCK_PRECISION, options.precision);
+  let cost = at(epsilon);
+  for (let k = 1; k < MAX_PLANS && cost.report.errorBoundOperator > options.precision && cost.report.precision === epsilon; k++) {
+    epsilon = Math.min(MAX_BLOCK_PRECISION, (REPLAN_MARGIN * epsilon * options.precision) / cost.report.errorBoundOperator);
+    cost = at(epsilon);
+  }
+  return cost;
 }
 
-export function directRoute(model: FermionModel, w: ComplexScalar, options: RouteOptions): RouteResolvent {
-  const shift = directShift(model, w);
-  const eta = Math.abs(w.im);
-  const delta = eta / shift.alpha;
-  const epsilon = options.precision * shift.alpha;
-  const { sequence, degree } = inverted(shift, delta, epsilon, 2 / eta, '(w - H)^-1 by QSVT');
-  const encoding = { ...sequence, errorBound: (Math.min(epsilon, 0.5) / shift.alpha) / sequence.alpha };
+function notes(cost: ResolventCost, target: number): string[] {
+  const r = cost.report;
+  const lines = [
+    `alpha_M = ${r.alphas.M.toPrecision(4)}; K = ${r.conditionBound.toPrecision(4)}; delta = ${r.delta.toExponential(2)}; degree ${r.degree} (truncation bound); bound on the encoding ${r.errorBoundOperator.toExponential(2)} (operator units)`,
+  ];
+  if (r.fastInverseBits !== null) {
+    lines.push(`fast inverse: ${r.fastInverseBits}-bit energy register, alpha = ${r.alphas.fastInverse!.toPrecision(4)}, bound ${r.errorParts.fastInverse.toExponential(2)}; ||B|| <= alpha_B = ${r.alphas.B!.toPrecision(4)}`);
+  }
+  if (r.precision !== r.requestedPrecision || r.errorBoundOperator > target) {
+    lines.push(`PRECISION NOT MET: the encoding's error on G is bounded by ${r.errorBoundOperator.toExponential(2)} > the target ${target.toExponential(2)} (the fast inverse's register cap limits it); the figures are for that precision`);
+  }
+  return lines;
+}
+
+function resolvent(model: FermionModel, w: ComplexScalar, route: RouteName, options: RouteOptions): RouteResolvent {
+  let cost: ResolventCost;
+  try {
+    cost = plan(model, w, route, options);
+  } catch (error) {
+    if (error instanceof UnreachablePrecisionError) return { unavailable: error.message };
+    throw error;
+  }
+  const r = cost.report;
+  const queries: Record<string, number> =
+    route === 'direct' ? { 'w - H': r.queries.H } : { 'I - (w - A)^-1 B': r.queries.M, '(w - A)^-1 (fast inverse)': r.queries.fastInverse, B: r.queries.B };
   return {
-    encoding,
-    degree,
-    queries: { 'w - H': degree },
-    registerBits: 0,
-    notes: [
-      `alpha(w - H) = |w| + ||H coefficients||_1 = ${shift.alpha.toPrecision(4)}; delta = eta/alpha = ${delta.toExponential(2)}`,
-    ],
+    encoding: cost.encoding,
+    degree: r.degree,
+    queries,
+    registerBits: r.fastInverseBits ?? 0,
+    precisionMet: r.errorBoundOperator <= options.precision,
+    notes: notes(cost, options.precision),
   };
-}
-
-export function preconditionedRoute(model: FermionModel, w: ComplexScalar, options: RouteOptions): RouteResolvent {
-  const eta = Math.abs(w.im);
-  const B = pauliLcu(jordanWigner(modelHamiltonian(model, { part: 'B' }), model.modes), 'B');
-  const alphaB = B.alpha;
-  const kappa = 1 + alphaB / eta;
-  const alphaFBound = 1 / eta;
-  const target = options.precision / 2 / (alphaFBound * kappa * (1 + kappa * alphaB * alphaFBound));
-  const [low, high] = FAST_INVERSE_PRECISION_RANGE;
-  const TA = subtract(model);
-  const F = fastInverse(TA, w, { precision: Math.min(high, Math.max(low, target)), electrons: options.electrons, adder: 'qft' });
-  const K = productEncoding([F, B], 'R_A B');
-  const M = shiftedEncoding(K, { re: 1, im: 0 }, '1 - R_A B');
-  const delta = 1 / (M.alpha * kappa);
-  const epsilon = (options.precision * M.alpha) / (2 * F.alpha);
-  const { sequence, degree } = inverted(M, delta, epsilon, 2 * kappa, '(1 - R_A B)^-1 by QSVT');
-  const resolvent = productEncoding([sequence, F], '(w - H)^-1 preconditioned');
-  const polynomialError = (F.alpha * Math.min(epsilon, 0.5)) / M.alpha;
-  const fastInverseError = F.alpha * F.errorBound * kappa * (1 + kappa * alphaB * F.alpha);
-  const errorBound = (polynomialError + fastInverseError) / resolvent.alpha;
-  return {
-    encoding: { ...resolvent, errorBound },
-    degree,
-    queries: { '1 - R_A B': degree, 'R_A (fast inverse)': degree + 1, B: degree },
-    registerBits: F.registerBits,
-    notes: [
-      `||B|| <= alpha_B = ${alphaB.toPrecision(4)} (Pauli 1-norm of B); kappa = 1 + alpha_B/eta = ${kappa.toPrecision(4)}; delta = ${delta.toExponential(2)}`,
-      `fast inverse: ${F.registerBits}-bit energy register${F.bitsCapped ? ' (capped)' : ''}, c = ${F.c.toPrecision(4)}, bound ${F.errorBound.toExponential(2)}`,
-    ],
-  };
-}
-
-/** T_A = T − (one-body part moved into B). */
-function subtract(model: FermionModel): FermionModel['oneBody'] {
-  const T = model.oneBody;
-  const moved = model.oneBodyInB;
-  return { n: T.n, re: T.re.map((x, k) => x - moved.re[k]!), im: T.im.map((x, k) => x - moved.im[k]!) };
 }
 
 /** The builder of one route, as greenCost takes it. */
-export function routeBuilder(model: FermionModel, route: RouteName) {
-  return (w: ComplexScalar, options: RouteOptions): RouteResolvent =>
-    route === 'direct' ? directRoute(model, w, options) : preconditionedRoute(model, w, options);
+export function routeBuilder(model: FermionModel, route: RouteName): ResolventBuilder {
+  return (w, options) => resolvent(model, w, route, options);
 }

@@ -17,8 +17,15 @@ import { resourceTotals, type ResourceTotals } from './resourceTotals.js';
 import { shotCount } from './shotCount.js';
 import { structuredBlockCounts } from './structuredCounts.js';
 
-/** What a route's resolvent builder returns: the encoding of (w − H)⁻¹ plus what it knows of its own construction. */
-export interface RouteResolvent {
+/** What a route's resolvent builder returns: the encoding of (w − H)⁻¹ plus what it knows of its own construction, or why it has none. */
+export type RouteResolvent = BuiltResolvent | UnavailableRoute;
+
+/** A route that cannot be costed (e.g. no precision is reachable), with the reason for the user. */
+export interface UnavailableRoute {
+  readonly unavailable: string;
+}
+
+export interface BuiltResolvent {
   readonly encoding: BlockEncoding;
   /** Polynomial degree of the inversion (0 when none). */
   readonly degree: number;
@@ -26,6 +33,8 @@ export interface RouteResolvent {
   readonly queries: Readonly<Record<string, number>>;
   /** Register bits (energy register of a fast inverse; 0 when none). */
   readonly registerBits: number;
+  /** Whether the encoding's error bound (operator units) meets the precision asked of it. */
+  readonly precisionMet: boolean;
   /** Further facts the route states (δ, κ, bounds used), printed under the table. */
   readonly notes: readonly string[];
 }
@@ -55,6 +64,7 @@ export interface PartCost {
   readonly degree: number;
   readonly queries: Readonly<Record<string, number>>;
   readonly registerBits: number;
+  readonly precisionMet: boolean;
   readonly logicalQubits: number;
   readonly rotationError: number;
   /** One run of the Hadamard-test circuit. */
@@ -66,6 +76,8 @@ export interface PartCost {
 
 export interface GreenCost {
   readonly parts: readonly PartCost[];
+  /** False when a part's encoding could only be costed at a coarser precision than its share of the budget. */
+  readonly precisionMet: boolean;
   readonly budget: ErrorBudget;
   readonly logicalQubits: number;
   /** Per run of the costlier test circuit. */
@@ -85,10 +97,11 @@ export interface GreenCost {
   readonly prepToffoli: number | null;
 }
 
-function partCost(part: 'particle' | 'hole', w: ComplexScalar, electrons: number, budget: ErrorBudget, options: GreenCostOptions): PartCost {
+function partCost(part: 'particle' | 'hole', w: ComplexScalar, electrons: number, budget: ErrorBudget, options: GreenCostOptions): PartCost | UnavailableRoute {
   const { model, pair } = options;
   const [i, j] = pair;
   const resolvent = options.build(w, { precision: budget.encodingPerPart, electrons });
+  if ('unavailable' in resolvent) return { unavailable: `${part} part: ${resolvent.unavailable}` };
   const encoding = resolvent.encoding;
   const first = part === 'particle' ? ladderEncoding(i, false, model.modes) : ladderEncoding(j, true, model.modes);
   const last = part === 'particle' ? ladderEncoding(j, true, model.modes) : ladderEncoding(i, false, model.modes);
@@ -110,6 +123,7 @@ function partCost(part: 'particle' | 'hole', w: ComplexScalar, electrons: number
     degree: resolvent.degree,
     queries: resolvent.queries,
     registerBits: resolvent.registerBits,
+    precisionMet: resolvent.precisionMet,
     // system + ancillas of R, one ancilla per ladder encoding, the test qubit, the decompositions' peak work qubits.
     logicalQubits: model.modes + ancillaQubits(encoding) + 2 + 1 + perRun.extraAncillas,
     rotationError,
@@ -121,10 +135,11 @@ function partCost(part: 'particle' | 'hole', w: ComplexScalar, electrons: number
 }
 
 /**
- * @throws RangeError for a pair outside the modes, ε ≤ 0, or a model whose electron number leaves no particle or
- * hole sector (then that part is skipped only when it is identically zero: N = modes has no particle part, N = 0 no hole).
+ * The route's cost, or why it has none (a part whose resolvent is unavailable). A part is skipped when it is
+ * identically zero: N = modes has no particle part, N = 0 no hole part.
+ * @throws RangeError for a pair outside the modes or ε ≤ 0.
  */
-export function greenCost(options: GreenCostOptions): GreenCost {
+export function greenCost(options: GreenCostOptions): GreenCost | UnavailableRoute {
   const { model, z, groundEnergy } = options;
   const [i, j] = options.pair;
   if (![i, j].every((m) => Number.isInteger(m) && m >= 0 && m < model.modes)) {
@@ -132,8 +147,14 @@ export function greenCost(options: GreenCostOptions): GreenCost {
   }
   const budget = errorBudget(options.precision);
   const parts: PartCost[] = [];
-  if (model.electrons < model.modes) parts.push(partCost('particle', { re: z.re + groundEnergy, im: z.im }, model.electrons + 1, budget, options));
-  if (model.electrons > 0) parts.push(partCost('hole', { re: groundEnergy - z.re, im: -z.im }, model.electrons - 1, budget, options));
+  const shifts: ['particle' | 'hole', ComplexScalar, number][] = [];
+  if (model.electrons < model.modes) shifts.push(['particle', { re: z.re + groundEnergy, im: z.im }, model.electrons + 1]);
+  if (model.electrons > 0) shifts.push(['hole', { re: groundEnergy - z.re, im: -z.im }, model.electrons - 1]);
+  for (const [part, w, electrons] of shifts) {
+    const cost = partCost(part, w, electrons, budget, options);
+    if ('unavailable' in cost) return cost;
+    parts.push(cost);
+  }
   const prep = options.prepToffoli ?? 0;
   const worst = parts.reduce((a, b) => (b.perRun.tCount > a.perRun.tCount ? b : a));
   const tests = 2;
@@ -143,6 +164,7 @@ export function greenCost(options: GreenCostOptions): GreenCost {
   const totalToffoliAe = parts.reduce((sum, p) => sum + tests * p.amplitudeEstimationCallsPerTest * (p.perRun.toffoli + prep), 0);
   return {
     parts,
+    precisionMet: parts.every((p) => p.precisionMet),
     budget,
     logicalQubits: Math.max(...parts.map((p) => p.logicalQubits)),
     toffoli: worst.perRun.toffoli + prep,

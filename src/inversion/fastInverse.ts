@@ -91,6 +91,21 @@ export interface FastInverseEncoding extends BlockEncoding {
   readonly flagRotations: number;
 }
 
+/**
+ * Rotations already built per matrix object and options: the rotation depends on T alone, not on w or the precision, so
+ * repeated encodings of one T (several shifts, re-planned precisions) diagonalise it once. T is not changed after a call.
+ */
+const rotationCache = new WeakMap<ComplexMatrix, Map<string, ReturnType<typeof oneBodyRotation>>>();
+
+function memoisedRotation(T: ComplexMatrix, options: Omit<OneBodyRotationOptions, 'name'>): ReturnType<typeof oneBodyRotation> {
+  let byOptions = rotationCache.get(T);
+  if (!byOptions) rotationCache.set(T, (byOptions = new Map()));
+  const key = JSON.stringify(options);
+  let rotation = byOptions.get(key);
+  if (!rotation) byOptions.set(key, (rotation = oneBodyRotation(T, options)));
+  return rotation;
+}
+
 /** Rounding units per simulated gate and per matrix entry in the floating-point term of the bound. */
 const FLOATING_POINT_FACTOR = 32;
 
@@ -138,7 +153,7 @@ export function fastInverse(T: ComplexMatrix, w: ComplexScalar, options: FastInv
   const n = T.n;
   const window = windowOf(options.electrons, n);
   const sector = window ?? { min: 0, max: n };
-  const rotation = oneBodyRotation(T, options.rotation ?? {});
+  const rotation = memoisedRotation(T, options.rotation ?? {});
   // ‖Σ X_ij a_i† a_j‖ ≤ N_max‖X‖₂ on the window (its eigenvalues are sums of N ≤ N_max eigenvalues of X).
   const rho = sector.max * rotation.residual;
   const grid = energyGrid(rotation.energies, sector, { budget: precision / 2, w, maxBits, rho });

@@ -1,9 +1,11 @@
 /**
  * costChartSvg: a log–log chart of cost against one model parameter, one line (with points) per route, drawn with
- * vega-lite compiled to vega and rendered server side like lineChartSvg. Same input, same bytes.
+ * vega-lite compiled to vega and rendered server side like lineChartSvg. Same input, same bytes; every route its own
+ * colour (distinctColors).
  */
 import * as vega from 'vega';
 import { compile, type TopLevelSpec } from 'vega-lite';
+import { distinctColors } from './distinctColors.js';
 
 export interface CostSeries {
   readonly name: string;
@@ -19,6 +21,7 @@ export interface CostChart {
 }
 
 export async function costChartSvg(chart: CostChart): Promise<string> {
+  const routes = chart.series.map((s) => s.name);
   const values = chart.series.flatMap((s) => s.x.map((x, k) => ({ x, y: s.y[k]!, route: s.name })));
   const spec: TopLevelSpec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
@@ -31,7 +34,7 @@ export async function costChartSvg(chart: CostChart): Promise<string> {
     encoding: {
       x: { field: 'x', type: 'quantitative', title: chart.xTitle, scale: { type: 'log' } },
       y: { field: 'y', type: 'quantitative', title: chart.yTitle, scale: { type: 'log' } },
-      color: { field: 'route', type: 'nominal', title: 'route', sort: chart.series.map((s) => s.name) },
+      color: { field: 'route', type: 'nominal', title: 'route', scale: { domain: routes, range: distinctColors(routes.length) } },
     },
   };
   const view = new vega.View(vega.parse(compile(spec).spec), { renderer: 'none' });

@@ -11,8 +11,10 @@ export interface ResolventReport {
   readonly w: ComplexScalar;
   /** Electron-number window [min, max] of the encoded operator P (w − H)⁻¹ P; null: the whole Fock space. */
   readonly window: { readonly min: number; readonly max: number } | null;
-  /** The requested ε (bound on the encoded operator in projected-block units). */
+  /** The ε planned for (bound on the encoded operator in projected-block units): the requested one unless it was not reachable. */
   readonly precision: number;
+  /** The ε asked for; larger than `precision` never, smaller only with the `reachablePrecision` option. */
+  readonly requestedPrecision: number;
   /** How ε was split: the polynomial's share and the quantisation's share (fast inverse plus its propagation). */
   readonly split: { readonly polynomial: number; readonly quantisation: number };
   /** K ≥ ‖M⁻¹‖ for the inverted operator M (I − F·B, or w − H). */

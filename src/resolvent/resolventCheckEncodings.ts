@@ -25,32 +25,50 @@ export interface ResolventCheckRow {
   readonly electrons: number;
 }
 
+/** A row before its encoding is built (building may fail, e.g. when the polynomial degree exceeds its cap). */
+export interface ResolventCheckPlan {
+  readonly label: string;
+  readonly route: ResolventOptions['route'];
+  readonly w: ComplexScalar;
+  readonly electrons: number;
+  /** @throws RangeError as resolventEncoding. */
+  readonly build: () => ResolventEncoding;
+}
+
 /**
  * Rows labelled exactly "inverse, preconditioned (particle)", "inverse, preconditioned (hole)", "inverse, direct (particle)",
- * "inverse, direct (hole)", in that order. A row is correct when the simulated projected block, on the columns of its
- * sector, is within the encoding's `errorBound` of exact()/α.
+ * "inverse, direct (hole)", in that order, not yet built.
  */
-export function resolventCheckEncodings(model: FermionModel, options: ResolventCheckOptions): ResolventCheckRow[] {
+export function resolventCheckPlans(model: FermionModel, options: ResolventCheckOptions): ResolventCheckPlan[] {
   const z = options.z ?? { re: (model.grid.from + model.grid.to) / 2, im: model.broadening };
   const { particle, hole } = greensShifts(options.E0, z);
   const precision = options.precision ?? 1e-2;
   const sector = (N: number): number => Math.min(model.modes, Math.max(0, N));
-  const row = (route: ResolventOptions['route'], w: ComplexScalar, N: number, part: string): ResolventCheckRow => {
+  const plan = (route: ResolventOptions['route'], w: ComplexScalar, N: number, part: string): ResolventCheckPlan => {
     const label = `inverse, ${route} (${part})`;
     const electrons = sector(N);
-    const encoding = resolventEncoding(model, w, {
-      ...options.resolvent,
-      route,
-      precision,
-      ...(options.window === true && route === 'preconditioned' ? { electrons } : {}),
-      label,
-    });
-    return { label, encoding, electrons };
+    const build = () =>
+      resolventEncoding(model, w, {
+        ...options.resolvent,
+        route,
+        precision,
+        ...(options.window === true && route === 'preconditioned' ? { electrons } : {}),
+        label,
+      });
+    return { label, route, w, electrons, build };
   };
   return [
-    row('preconditioned', particle, model.electrons + 1, 'particle'),
-    row('preconditioned', hole, model.electrons - 1, 'hole'),
-    row('direct', particle, model.electrons + 1, 'particle'),
-    row('direct', hole, model.electrons - 1, 'hole'),
+    plan('preconditioned', particle, model.electrons + 1, 'particle'),
+    plan('preconditioned', hole, model.electrons - 1, 'hole'),
+    plan('direct', particle, model.electrons + 1, 'particle'),
+    plan('direct', hole, model.electrons - 1, 'hole'),
   ];
+}
+
+/**
+ * The rows of resolventCheckPlans, built. A row is correct when the simulated projected block, on the columns of its
+ * sector, is within the encoding's `errorBound` of exact()/α.
+ */
+export function resolventCheckEncodings(model: FermionModel, options: ResolventCheckOptions): ResolventCheckRow[] {
+  return resolventCheckPlans(model, options).map(({ label, electrons, build }) => ({ label, encoding: build(), electrons }));
 }

@@ -1,23 +1,30 @@
 /**
- * resolventCost: the report of resolventEncoding without building the polynomial, its phases or the QSVT circuit, for
- * costing models and shifts whose degree is too high to build: the factor encodings are built (no dense matrices), the
- * degree is Childs–Kothari–Somma's truncation bound at the same δ and ε (inverseDegreeBound, an upper bound on the built
- * degree), α of the inverse is 1/(s α_M) with s ≈ supTarget·δ, and the error bound uses s < δ.
+ * resolventCost: resolventEncoding's report and circuit structure without computing the polynomial or its phases, for
+ * costing models and shifts whose degree is too high to build. The plan (planResolvent) is the same: the factor
+ * encodings are built (lazy exact(), no dense matrices), K, δ and the precision split are the same. The degree is
+ * Childs–Kothari–Somma's truncation bound at the same δ and ε (inverseDegreeBound, an upper bound on the built degree);
+ * α of the inverse is 1/(s α_M) with s ≈ supTarget·δ; the error bound is the plan's rigorous one with s < δ. The
+ * encoding is the built route's circuit — qsvtInverseStructure of M (the real QSVT sequence with placeholder phases),
+ * times F on the preconditioned route, exactly as resolventEncoding composes it — for counting only: exact() throws.
  */
-import { ancillaQubits, ancillaRoles, type BlockEncoding } from '../blocks/BlockEncoding.js';
+import { ancillaQubits, type BlockEncoding } from '../blocks/BlockEncoding.js';
+import { productEncoding } from '../blocks/combine/productEncoding.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
 import { inverseDegreeBound } from '../qsvt/inverseDegreeBound.js';
 import { relativeInverseError } from '../qsvt/qsvtInverse.js';
-import { planResolvent, type ResolventOptions } from './internal/planResolvent.js';
+import { qsvtInverseStructure } from '../qsvt/qsvtInverseStructure.js';
+import { planResolvent, type ResolventOptions } from './planResolvent.js';
 import type { ResolventReport } from './ResolventReport.js';
 
-function roleCount(encoding: BlockEncoding, role: 'signal' | 'clean'): number {
-  return ancillaRoles(encoding).filter((r) => r === role).length;
+export interface ResolventCost {
+  readonly report: ResolventReport;
+  /** The route's circuit with placeholder phases, α = report.alphas.total, errorBound = report.errorBound. */
+  readonly encoding: BlockEncoding;
 }
 
-/** @throws RangeError as resolventEncoding, except for the degree cap. */
-export function resolventCost(model: FermionModel, w: ComplexScalar, options: ResolventOptions): ResolventReport {
+/** @throws as planResolvent (RangeError, UnreachablePrecisionError); the degree cap does not apply. */
+export function resolventCost(model: FermionModel, w: ComplexScalar, options: ResolventOptions): ResolventCost {
   const plan = planResolvent(model, w, options, 'resolventCost');
   const { M, F } = plan;
   const K = plan.conditionBound;
@@ -27,15 +34,15 @@ export function resolventCost(model: FermionModel, w: ComplexScalar, options: Re
   const inverseError = plan.polynomialError + inputPropagation;
   const eF = F?.errorBound ?? 0;
   const errorBound = F ? eF + (1 + eF) * inverseError : inverseError;
-  const total = F ? alphaInverse * F.alpha : alphaInverse;
-  // Ancillas: M's and the QSVT qubit; with F, the product keeps both signal parts and shares one clean pool.
-  const inverseSignal = roleCount(M, 'signal') + 1;
-  const ancilla = F ? inverseSignal + roleCount(F, 'signal') + Math.max(roleCount(M, 'clean'), roleCount(F, 'clean')) : ancillaQubits(M) + 1;
-  return {
+  const inverse = qsvtInverseStructure(M, { degree, alpha: alphaInverse, errorBound: inverseError, label: `(${M.label})^-1` });
+  const whole = F ? productEncoding([inverse, F]) : inverse;
+  const total = whole.alpha;
+  const report: ResolventReport = {
     route: options.route,
     w,
     window: plan.window,
-    precision: options.precision,
+    precision: plan.precision,
+    requestedPrecision: options.precision,
     split: plan.split,
     conditionBound: K,
     normBoundM: plan.normBoundM,
@@ -49,8 +56,9 @@ export function resolventCost(model: FermionModel, w: ComplexScalar, options: Re
     errorParts: { polynomial: plan.polynomialError, phases: 0, inputPropagation, fastInverse: eF },
     errorBound,
     errorBoundOperator: errorBound * total,
-    qubits: { system: model.modes, ancilla, total: model.modes + ancilla },
+    qubits: { system: whole.systemQubits, ancilla: ancillaQubits(whole), total: whole.block.qubits },
     fastInverseBits: F?.registerBits ?? null,
     estimated: true,
   };
+  return { report, encoding: { ...whole, label: options.label ?? `(w - H)^-1, ${options.route} (cost structure)`, errorBound } };
 }

@@ -11,10 +11,10 @@ import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
 import { qsvtInverse } from '../qsvt/qsvtInverse.js';
 import { denseResolvent } from './internal/denseResolvent.js';
-import { planResolvent, type ResolventOptions } from './internal/planResolvent.js';
+import { planResolvent, type ResolventOptions } from './planResolvent.js';
 import type { ResolventReport } from './ResolventReport.js';
 
-export type { ResolventOptions } from './internal/planResolvent.js';
+export type { ResolventOptions } from './planResolvent.js';
 
 export interface ResolventEncoding extends BlockEncoding {
   readonly report: ResolventReport;
@@ -41,7 +41,8 @@ export function resolventEncoding(model: FermionModel, w: ComplexScalar, options
     route: options.route,
     w,
     window: plan.window,
-    precision: options.precision,
+    precision: plan.precision,
+    requestedPrecision: options.precision,
     split: plan.split,
     conditionBound: plan.conditionBound,
     normBoundM: plan.normBoundM,

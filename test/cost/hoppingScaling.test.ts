@@ -10,6 +10,7 @@ function toffoli(hopping: number, route: 'preconditioned' | 'direct'): { toffoli
   const model = parseModel({ lattice: { shape: 'chain', sites: 2, hopping }, interaction: 4, electrons: 2, broadening: 0.1 }, 'chain');
   // E0 = 0 for every hopping keeps the shift w fixed, so only ‖A‖ changes.
   const cost = greenCost({ model, pair: [0, 0], z: { re: 0, im: 0.1 }, precision: 1e-2, groundEnergy: 0, build: routeBuilder(model, route) });
+  if ('unavailable' in cost) throw new Error(cost.unavailable);
   return { toffoli: cost.toffoli, bits: Math.max(...cost.parts.map((p) => p.registerBits)) };
 }
 

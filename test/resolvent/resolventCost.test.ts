@@ -19,7 +19,7 @@ describe('resolventCost', () => {
   const precision = 1e-2;
   const hoppings = [1, 10, 100, 1000];
   const reports = (route: 'preconditioned' | 'direct') =>
-    hoppings.map((t) => resolventCost(hubbard({ sites: 2, hopping: t, interaction: U, chemicalPotential: 0.5 }), w, { route, precision, fastInverse: { maxBits: 24 } }));
+    hoppings.map((t) => resolventCost(hubbard({ sites: 2, hopping: t, interaction: U, chemicalPotential: 0.5 }), w, { route, precision, fastInverse: { maxBits: 24 } }).report);
 
   it('keeps the preconditioned query count below one bound set by ‖B‖ and η alone, within 10 % from t = 100 to t = 1000', () => {
     // ‖B‖ = U·L for the Hubbard interaction U Σ n↑n↓ on L = 2 sites (all sites doubly occupied; common practice).
@@ -46,14 +46,32 @@ describe('resolventCost', () => {
   it('bounds the degree the full build measures (truncation bound ≥ built degree) with the same α_M and δ', () => {
     const model = hubbard({ sites: 2, hopping: 1, interaction: 0.5, chemicalPotential: 0.3 });
     for (const route of ['direct', 'preconditioned'] as const) {
-      const cost = resolventCost(model, { re: 0.2, im: 1 }, { route, precision: 0.05 });
-      const built = resolventEncoding(model, { re: 0.2, im: 1 }, { route, precision: 0.05 }).report;
+      const { report: cost, encoding } = resolventCost(model, { re: 0.2, im: 1 }, { route, precision: 0.05 });
+      const builtEncoding = resolventEncoding(model, { re: 0.2, im: 1 }, { route, precision: 0.05 });
+      const built = builtEncoding.report;
+      expect(encoding.block.qubits).toBe(builtEncoding.block.qubits);
+      expect(encoding.ancillas).toEqual(builtEncoding.ancillas);
+      expect(encoding.alpha).toBe(cost.alphas.total);
+      expect(encoding.errorBound).toBe(cost.errorBound);
+      expect(() => encoding.exact()).toThrow(/placeholder phases/);
       expect(cost.estimated).toBe(true);
       expect(cost.degree).toBeGreaterThanOrEqual(built.degree);
       expect(cost.delta).toBe(built.delta);
       expect(cost.alphas.M).toBe(built.alphas.M);
       expect(cost.qubits).toEqual(built.qubits);
     }
+  });
+
+  it('plans for the reachable precision when asked, and says so, when the capped fast inverse cannot meet ε', () => {
+    const model = hubbard({ sites: 2, hopping: 1, interaction: 0.5, chemicalPotential: 0.3 });
+    // A 3-bit register at η = 3 is coarse enough to miss ε = 1e-9 yet keep δ > 0 (found by trying widths 3…9, η = 0.3…3).
+    const w = { re: 0.2, im: 3 };
+    const options = { route: 'preconditioned', precision: 1e-9, fastInverse: { maxBits: 3 }, reachablePrecision: true } as const;
+    const { report } = resolventCost(model, w, options);
+    expect(report.requestedPrecision).toBe(1e-9);
+    expect(report.precision).toBeGreaterThan(1e-9);
+    expect(report.errorBound).toBeLessThanOrEqual(report.precision);
+    expect(() => resolventCost(model, w, { ...options, reachablePrecision: false })).toThrow(/cannot be met.*is reachable/);
   });
 
   it('refuses Im w = 0, ε ≥ 1, δ ≤ 0 and a degree beyond the cap with RangeErrors naming the value', () => {

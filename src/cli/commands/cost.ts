@@ -9,7 +9,7 @@ import type { Command } from 'commander';
 import { InputError } from '../../core/InputError.js';
 import { writeFileAtomic } from '../../core/writeFileAtomic.js';
 import { compareRoutes, ROUTES, type CompareOptions, type RouteComparison } from '../../cost/compareRoutes.js';
-import type { GreenCost } from '../../cost/greenCost.js';
+import type { GreenCost, UnavailableRoute } from '../../cost/greenCost.js';
 import { varyModelInput } from '../../cost/varyModelInput.js';
 import { describeModel } from '../../model/describeModel.js';
 import type { FermionModel } from '../../model/FermionModel.js';
@@ -79,8 +79,13 @@ function compareOptions(model: FermionModel, options: CostCliOptions): CompareOp
   };
 }
 
-function routeJson(cost: GreenCost): Record<string, unknown> {
+const FIGURES = ['logicalQubits', 'toffoli', 'tCount', 'rotations', 'queries', 'shots', 'totalToffoli', 'alpha', 'degree', 'errorBudget', 'parts', 'prepToffoli'];
+
+function routeJson(cost: GreenCost | UnavailableRoute): Record<string, unknown> {
+  if ('unavailable' in cost) return { available: false, reason: cost.unavailable, ...Object.fromEntries(FIGURES.map((f) => [f, null])) };
   return {
+    available: true,
+    precisionMet: cost.precisionMet,
     logicalQubits: cost.logicalQubits,
     toffoli: cost.toffoli,
     tCount: cost.tCount,
@@ -102,6 +107,7 @@ function routeJson(cost: GreenCost): Record<string, unknown> {
         tPerRotation: p.perRun.tPerRotation,
         degree: p.degree,
         registerBits: p.registerBits,
+        precisionMet: p.precisionMet,
       })),
     },
     parts: cost.parts.map((p) => ({
@@ -126,7 +132,8 @@ const sci = (x: number): string => (Math.abs(x) >= 1e6 ? x.toExponential(3) : St
 
 function tableReport(model: FermionModel, comparison: RouteComparison, options: CompareOptions): string {
   const { preconditioned: p, direct: d } = comparison.routes;
-  const row = (label: string, f: (c: GreenCost) => number): string[] => [label, sci(f(p)), sci(f(d))];
+  const cell = (c: GreenCost | UnavailableRoute, f: (c: GreenCost) => number): string => ('unavailable' in c ? 'n/a' : sci(f(c)));
+  const row = (label: string, f: (c: GreenCost) => number): string[] => [label, cell(p, f), cell(d, f)];
   const table = formatTable(
     ['per Hadamard-test run unless stated', 'preconditioned', 'direct'],
     [
@@ -143,7 +150,11 @@ function tableReport(model: FermionModel, comparison: RouteComparison, options: 
     ],
     ['left', 'right', 'right'],
   );
-  const notes = ROUTES.flatMap((route) => comparison.routes[route].parts.flatMap((part) => part.notes.map((n) => `  ${route} (${part.part}): ${n}`)));
+  const notes = ROUTES.flatMap((route) => {
+    const cost = comparison.routes[route];
+    if ('unavailable' in cost) return [`  ${route}: NOT AVAILABLE: ${cost.unavailable}`];
+    return cost.parts.flatMap((part) => part.notes.map((n) => `  ${route} (${part.part}): ${n}`));
+  });
   return (
     `${describeModel(model)}\nG_${options.pair[0]}${options.pair[1]}(z) at z = ${options.z.re} + ${options.z.im}i to |dG| <= ${options.precision}\n${table}\n` +
     `Assumptions:\n${comparison.assumptions.map((a) => `  - ${a}`).join('\n')}\n${notes.join('\n')}\n`
@@ -161,6 +172,7 @@ async function sweep(file: string, options: CostCliOptions, out: string): Promis
     const comparison = compareRoutes(model, compareOptions(model, options));
     for (const route of ROUTES) {
       const c = comparison.routes[route];
+      if ('unavailable' in c) continue;
       rows.push({ parameter: value, route, values: { logicalQubits: c.logicalQubits, toffoli: c.toffoli, tCount: c.tCount, rotations: c.rotations, degree: c.degree, alpha: c.alpha, shots: c.shots, totalToffoli: c.totalToffoli } });
     }
   }
@@ -175,7 +187,9 @@ async function sweep(file: string, options: CostCliOptions, out: string): Promis
   });
   writeFileAtomic(join(out, 'cost.csv'), costCsv(key, CSV_COLUMNS, rows));
   writeFileAtomic(join(out, 'cost.svg'), svg);
-  return `wrote ${join(out, 'cost.csv')} and ${join(out, 'cost.svg')} (${values.length} values of ${key}, both routes)\n`;
+  const missing = values.length * ROUTES.length - rows.length;
+  const skipped = missing === 0 ? '' : `; ${missing} route/value pairs not available, left out`;
+  return `wrote ${join(out, 'cost.csv')} and ${join(out, 'cost.svg')} (${values.length} values of ${key}, both routes${skipped})\n`;
 }
 
 /** Adds `cost MODEL [options]` to the program. */

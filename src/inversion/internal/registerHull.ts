@@ -26,25 +26,35 @@ export function registerHull(energies: Float64Array, weights: readonly number[],
   const high = new Float64Array((maxN + 1) * width).fill(-Infinity);
   low[0] = 0;
   high[0] = 0;
+  // Reachable partial sums after the modes so far: for N electrons, reachLow[N] … reachHigh[N] (empty when low > high).
+  // Only those cells are swept, and only electron counts that can still end inside the window (N + modes left ≥ min).
+  const reachLow = new Float64Array(maxN + 1).fill(Infinity);
+  const reachHigh = new Float64Array(maxN + 1).fill(-Infinity);
+  reachLow[0] = 0;
+  reachHigh[0] = 0;
   for (let k = 0; k < n; k++) {
     const a = shifted[k]!;
     const e = energies[k]!;
-    for (let N = Math.min(k, maxN - 1); N >= 0; N--) {
+    const lowestN = Math.max(0, window.min - (n - k));
+    for (let N = Math.min(k, maxN - 1); N >= lowestN; N--) {
+      if (reachLow[N]! > reachHigh[N]!) continue;
       const from = N * width;
       const to = (N + 1) * width + a;
-      for (let s = N * span; s >= 0; s--) {
+      for (let s = reachHigh[N]!; s >= reachLow[N]!; s--) {
         const l = low[from + s]!;
         if (l === Infinity) continue;
         if (l + e < low[to + s]!) low[to + s] = l + e;
         const h = high[from + s]! + e;
         if (h > high[to + s]!) high[to + s] = h;
       }
+      reachLow[N + 1] = Math.min(reachLow[N + 1]!, reachLow[N]! + a);
+      reachHigh[N + 1] = Math.max(reachHigh[N + 1]!, reachHigh[N]! + a);
     }
   }
   const outLow = new Float64Array(top + 1).fill(Number.NaN);
   const outHigh = new Float64Array(top + 1).fill(Number.NaN);
   for (let N = window.min; N <= window.max; N++) {
-    for (let s = 0; s <= N * span; s++) {
+    for (let s = Math.max(0, reachLow[N]!); s <= Math.min(N * span, reachHigh[N]!); s++) {
       const l = low[N * width + s]!;
       if (l === Infinity) continue;
       const v = s + N * aMin - sumMin;

@@ -7,6 +7,8 @@
  *
  * Hierarchy (nothing copied): `qsvt_phase(theta)` is the reflection; `qsvt_step(theta_a, theta_b)` is one U, a phase,
  * one U† and a phase; the sequence calls the step ⌊d/2⌋ times with its own angles, plus one U and a phase when d is odd.
+ * The placeholder form (placeholderQsvtCircuit, for counting) gives every phase one angle, so its ⌊d/2⌋ steps are one
+ * call with power ⌊d/2⌋ and any degree takes constant memory.
  * When U is in compute/action form and its compute touches no signal qubit, the compute commutes with every reflection,
  * so U = C⁻¹·Act·C gives U_Φ = C⁻¹·(the sequence of Act and Act†)·C: the action-only form computes once.
  */
@@ -43,12 +45,37 @@ function splitConjugated(encoding: BlockEncoding): { compute: Block; action: Blo
   };
 }
 
+/** The rz angles of a sequence: the first phase, the steps' angle pairs (each repeated `times`), the last phase (odd d). */
+interface SequenceAngles {
+  readonly degree: number;
+  readonly first: number;
+  readonly steps: readonly { readonly a: number; readonly b: number; readonly times: number }[];
+  readonly last: number | null;
+}
+
 /**
  * @param psi reflection-convention phases ψ_0 … ψ_d (reflectionPhases); the one applied first is ψ_d.
  * @param actionOnly use the action-only form when U allows it.
  */
 export function qsvtCircuit(encoding: BlockEncoding, psi: Float64Array, actionOnly: boolean, label: string): QsvtCircuit {
   const d = psi.length - 1;
+  const steps: { a: number; b: number; times: number }[] = [];
+  for (let k = d - 1; k >= 1; k -= 2) steps.push({ a: 2 * psi[k]!, b: 2 * psi[k - 1]!, times: 1 });
+  return sequenceCircuit(encoding, { degree: d, first: 2 * psi[d]!, steps, last: d % 2 === 1 ? 2 * psi[0]! : null }, actionOnly, label);
+}
+
+/**
+ * The circuit of qsvtCircuit for degree d with every rz angle equal to `angle`: the same blocks, qubits and calls, for
+ * counting resources of a degree whose phases are not computed.
+ */
+export function placeholderQsvtCircuit(encoding: BlockEncoding, degree: number, angle: number, actionOnly: boolean, label: string): QsvtCircuit {
+  const pairs = Math.floor(degree / 2);
+  const steps = pairs > 0 ? [{ a: angle, b: angle, times: pairs }] : [];
+  return sequenceCircuit(encoding, { degree, first: angle, steps, last: degree % 2 === 1 ? angle : null }, actionOnly, label);
+}
+
+function sequenceCircuit(encoding: BlockEncoding, angles: SequenceAngles, actionOnly: boolean, label: string): QsvtCircuit {
+  const d = angles.degree;
   const width = encoding.systemQubits + ancillaQubits(encoding);
   const q = width;
   const signal = ancillaIndicesWithRole(encoding, 'signal');
@@ -73,9 +100,10 @@ export function qsvtCircuit(encoding: BlockEncoding, psi: Float64Array, actionOn
       call(phaseBlock, phaseQubits, [param(1)]),
     ],
   );
-  const sequence: UnitaryOp[] = [call(phaseBlock, phaseQubits, [2 * psi[d]!])];
-  for (let k = d - 1; k >= 1; k -= 2) sequence.push(call(step, [...inner, q], [2 * psi[k]!, 2 * psi[k - 1]!]));
-  if (d % 2 === 1) sequence.push(call(query, inner), call(phaseBlock, phaseQubits, [2 * psi[0]!]));
+  const sequence: UnitaryOp[] = [call(phaseBlock, phaseQubits, [angles.first])];
+  const stepQubits = [...inner, q];
+  for (const { a, b, times } of angles.steps) sequence.push(call(step, stepQubits, [a, b], times === 1 ? {} : { power: times }));
+  if (angles.last !== null) sequence.push(call(query, inner), call(phaseBlock, phaseQubits, [angles.last]));
   const compute: UnitaryOp[] = [gate('h', [q])];
   if (split) compute.push(call(split.compute, inner));
   const block = defineConjugatedBlock(
