@@ -66,6 +66,26 @@ export { diagonalizeOneBody } from './rotations/diagonalizeOneBody.js';
 export { oneBodyRotation } from './rotations/oneBodyRotation.js';
 export { slaterDeterminant } from './rotations/slaterDeterminant.js';
 
+export { quantumFourierTransform } from './arithmetic/quantumFourierTransform.js';
+export { fourierConstantAdder } from './arithmetic/fourierConstantAdder.js';
+export { cuccaroAdder } from './arithmetic/cuccaroAdder.js';
+export { rippleConstantAddition } from './arithmetic/rippleConstantAddition.js';
+
+export { fastInverse, type FastInverseEncoding, type FastInverseOptions } from './inversion/fastInverse.js';
+export { directShift } from './inversion/directShift.js';
+export { greensShifts, type GreensShifts } from './inversion/greensShifts.js';
+export { oneBodyOfA } from './inversion/oneBodyOfA.js';
+
+export type { ResolventFactory } from './readout/ResolventFactory.js';
+export type { InitialState, StateAmplitudes } from './readout/InitialState.js';
+export { preparedStates } from './readout/preparedStates.js';
+export { greenParts, type GreenPart, type GreenPartName } from './readout/greenParts.js';
+export { hadamardTestCircuit, type TestComponent } from './readout/hadamardTestCircuit.js';
+export { hadamardTests, type HadamardTest } from './readout/hadamardTests.js';
+export { encodedExpectation } from './readout/encodedExpectation.js';
+export { estimateGreen, type GreenEstimate, type GreenEstimateOptions, type PartEstimate, type TestReading } from './readout/estimateGreen.js';
+export { shotsForPrecision, type ShotPlan } from './readout/shotsForPrecision.js';
+
 export { StateVector } from './sim/StateVector.js';
 export { simulateState } from './sim/simulateState.js';
 export { applyCircuit } from './sim/applyCircuit.js';

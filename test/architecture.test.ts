@@ -14,6 +14,7 @@ const ALLOWED: Record<string, readonly string[]> = {
   polynomial: ['core', 'linalg'],
   model: ['core', 'linalg'],
   operators: ['core', 'linalg', 'model'],
+  operatorFile: ['core', 'linalg', 'model', 'operators'],
   exact: ['core', 'linalg', 'model', 'operators'],
   blocks: ['core', 'circuit', 'linalg', 'polynomial', 'model', 'operators'],
   rotations: ['core', 'circuit', 'linalg', 'model'],
@@ -24,9 +25,11 @@ const ALLOWED: Record<string, readonly string[]> = {
   resolvent: ['core', 'circuit', 'linalg', 'polynomial', 'model', 'operators', 'blocks', 'rotations', 'arithmetic', 'inversion', 'qsvt'],
   readout: ['core', 'circuit', 'linalg', 'polynomial', 'model', 'operators', 'blocks', 'rotations', 'arithmetic', 'inversion', 'qsvt', 'resolvent', 'sim'],
   qasm: ['core', 'circuit'],
-  verify: ['core', 'circuit', 'linalg', 'polynomial', 'model', 'operators', 'blocks', 'rotations', 'arithmetic', 'inversion', 'qsvt', 'resolvent', 'sim'],
+  verify: ['core', 'circuit', 'linalg', 'polynomial', 'model', 'operators', 'operatorFile', 'blocks', 'rotations', 'arithmetic', 'inversion', 'qsvt', 'resolvent', 'sim', 'qasm'],
+  cost: ['core', 'circuit', 'linalg', 'polynomial', 'model', 'operators', 'blocks', 'rotations', 'arithmetic', 'inversion', 'qsvt', 'resolvent'],
   report: ['core', 'linalg', 'model', 'exact'],
-  cli: ['core', 'circuit', 'linalg', 'polynomial', 'model', 'operators', 'exact', 'blocks', 'rotations', 'arithmetic', 'inversion', 'qsvt', 'resolvent', 'readout', 'sim', 'qasm', 'verify', 'report'],
+  testing: ['core', 'circuit', 'linalg', 'polynomial', 'model', 'operators', 'operatorFile', 'exact', 'blocks', 'rotations', 'arithmetic', 'inversion', 'qsvt', 'resolvent', 'readout', 'sim', 'qasm', 'verify', 'report', 'cost'],
+  cli: ['core', 'circuit', 'linalg', 'polynomial', 'model', 'operators', 'operatorFile', 'exact', 'blocks', 'rotations', 'arithmetic', 'inversion', 'qsvt', 'resolvent', 'readout', 'sim', 'qasm', 'verify', 'report', 'cost'],
 };
 
 function sourceFiles(dir: string): string[] {

@@ -4,31 +4,53 @@
  */
 import { InputError } from '../core/InputError.js';
 
-export function parseNonNegativeInteger(option: string, text: string): number {
-  if (!/^\d+$/.test(text.trim())) {
-    throw new InputError(`${option} must be a non-negative integer, got "${text}"`);
-  }
-  const value = Number(text);
-  if (!Number.isSafeInteger(value)) throw new InputError(`${option} is too large: "${text}"`);
-  return value;
+/** What an unparsable or out-of-range number was: the text as written, and why a finite-looking one is out of reach. */
+function written(text: string): string {
+  const value = Number(text.trim());
+  const beyond = text.trim() !== '' && Number.isNaN(value) === false && !Number.isFinite(value) ? ' (beyond the double range, ±1.8e308)' : '';
+  return `"${text}"${beyond}`;
 }
 
-export function parsePositiveInteger(option: string, text: string): number {
-  const value = parseNonNegativeInteger(option, text);
-  if (value === 0) throw new InputError(`${option} must be at least 1, got "${text}"`);
-  return value;
+/**
+ * A whole number from `min` to `max` (both inclusive; max at most 2^53 − 1, the default), written in decimal
+ * digits. The message states the range and what was written: `--shots must be a whole number from 1 to
+ * 1000000000, got "-1"`; without a stated max, a value too small reads `--shots must be at least 1 (a whole
+ * number), got "0"`.
+ */
+export function parseIntegerInRange(option: string, text: string, min: number, max?: number): number {
+  const value = /^\d+$/.test(text.trim()) ? Number(text) : Number.NaN;
+  const high = max ?? Number.MAX_SAFE_INTEGER;
+  if (value >= min && value <= high) return value;
+  if (max === undefined && !(value > high)) throw new InputError(`${option} must be at least ${min} (a whole number), got ${written(text)}`);
+  throw new InputError(`${option} must be a whole number from ${min} to ${high}, got ${written(text)}`);
+}
+
+export function parseNonNegativeInteger(option: string, text: string, max?: number): number {
+  return parseIntegerInRange(option, text, 0, max);
+}
+
+export function parsePositiveInteger(option: string, text: string, max?: number): number {
+  return parseIntegerInRange(option, text, 1, max);
 }
 
 export function parseFiniteNumber(option: string, text: string): number {
   const trimmed = text.trim();
   const value = trimmed === '' ? Number.NaN : Number(trimmed);
-  if (!Number.isFinite(value)) throw new InputError(`${option} must be a finite number, got "${text}"`);
+  if (!Number.isFinite(value)) throw new InputError(`${option} must be a finite number, got ${written(text)}`);
   return value;
 }
 
 export function parsePositiveNumber(option: string, text: string): number {
   const value = parseFiniteNumber(option, text);
   if (!(value > 0)) throw new InputError(`${option} must be greater than 0, got "${text}"`);
+  return value;
+}
+
+/** A number from `min` to `max` (both inclusive); the message states the range and what was written. */
+export function parseNumberInRange(option: string, text: string, min: number, max: number): number {
+  const trimmed = text.trim();
+  const value = trimmed === '' ? Number.NaN : Number(trimmed);
+  if (!(value >= min && value <= max)) throw new InputError(`${option} must lie from ${min} to ${max}, got ${written(text)}`);
   return value;
 }
 

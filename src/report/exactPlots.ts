@@ -1,7 +1,8 @@
 /**
  * exactPlots: the two SVG plots of `polewright exact --out`: spectral.svg (A_ii(ω) of the computed
  * diagonal entries) and selfenergy.svg (Re Σ_ii solid, Im Σ_ii dashed, one colour per entry, entries
- * that are zero on the whole grid left out and named in a note).
+ * that are zero on the whole grid left out and named in a note). Titles name the model; legend titles
+ * say what the series are.
  */
 import type { ExactSolution } from '../exact/solveExact.js';
 import { spectralFunction } from '../exact/spectralFunction.js';
@@ -19,13 +20,15 @@ export interface ExactPlots {
 /** Entries whose largest |value| on the grid is at most this times max(1, largest |Σ| anywhere) count as zero. */
 export const ZERO_ENTRY = 1e-12;
 
-export async function exactPlots(s: ExactSolution): Promise<ExactPlots> {
+/** `modelName` heads both titles. */
+export async function exactPlots(s: ExactSolution, modelName: string): Promise<ExactPlots> {
   const notes: string[] = [];
   const diagonal = s.green.filter((e) => e.i === e.j);
   let spectral: string | null = null;
   if (diagonal.length > 0) {
     spectral = await lineChartSvg({
-      title: `Spectral function A_ii(ω) = −Im G_ii(ω + iη)/π, η = ${s.broadening}`,
+      title: `${modelName}: spectral function A_ii(ω) = −Im G_ii(ω + iη)/π, η = ${s.broadening}`,
+      seriesTitle: 'diagonal entry A_ii',
       xTitle: 'ω (model energy units)',
       yTitle: 'A(ω) (1/energy)',
       series: diagonal.map((e) => ({ name: `A_${e.i}${e.i}`, x: s.frequencies, y: spectralFunction(e) })),
@@ -51,7 +54,9 @@ export async function exactPlots(s: ExactSolution): Promise<ExactPlots> {
     } else {
       if (zero.length > 0) notes.push(`selfenergy.svg leaves out entries that are zero on the whole grid: ${zero.join(', ')}`);
       selfEnergy = await lineChartSvg({
-        title: `Self-energy Σ_ii(ω + iη), η = ${s.broadening} (Re solid, Im dashed)`,
+        title: `${modelName}: self-energy Σ_ii(ω + iη), η = ${s.broadening} (Re solid, Im dashed)`,
+        seriesTitle: 'diagonal entry Σ_ii',
+        styleTitle: 'part of Σ_ii',
         xTitle: 'ω (model energy units)',
         yTitle: 'Σ(ω + iη) (energy units)',
         styles: ['Re', 'Im'],

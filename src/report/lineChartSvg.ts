@@ -26,6 +26,10 @@ export interface LineChart {
   readonly series: readonly LineSeries[];
   /** Line styles in legend order, e.g. ['Re', 'Im']: the first is solid, the next ones dashed ever shorter. */
   readonly styles?: readonly string[];
+  /** Title of the colour legend, saying what the series are, e.g. "entry A_ii". */
+  readonly seriesTitle: string;
+  /** Title of the line-style legend when there are styles, e.g. "part of Σ". */
+  readonly styleTitle?: string;
   /** Default 640 × 360. */
   readonly width?: number;
   readonly height?: number;
@@ -33,7 +37,7 @@ export interface LineChart {
 
 const DASHES: readonly (readonly number[])[] = [[1, 0], [6, 3], [2, 2], [8, 3, 2, 3]];
 
-/** Renders the chart; the colour legend is titled "series", the style legend "part". */
+/** Renders the chart; the colour legend is titled `seriesTitle`, the style legend `styleTitle` (default "line style"). */
 export async function lineChartSvg(chart: LineChart): Promise<string> {
   const styles = chart.styles ?? [];
   if (styles.length > DASHES.length) throw new RangeError(`lineChartSvg: at most ${DASHES.length} line styles, got ${styles.length}`);
@@ -55,7 +59,7 @@ export async function lineChartSvg(chart: LineChart): Promise<string> {
     encoding: {
       x: { field: 'x', type: 'quantitative', title: chart.xTitle },
       y: { field: 'y', type: 'quantitative', title: chart.yTitle },
-      color: { field: 'group', type: 'nominal', title: 'series', scale: { domain: groups, range: distinctColors(groups.length) } },
+      color: { field: 'group', type: 'nominal', title: chart.seriesTitle, scale: { domain: groups, range: distinctColors(groups.length) } },
       detail: { field: 'series', type: 'nominal' },
       ...(styles.length === 0
         ? {}
@@ -63,7 +67,7 @@ export async function lineChartSvg(chart: LineChart): Promise<string> {
             strokeDash: {
               field: 'style',
               type: 'nominal',
-              title: 'part',
+              title: chart.styleTitle ?? 'line style',
               scale: { domain: [...styles], range: DASHES.slice(0, styles.length).map((d) => [...d]) },
             },
           }),

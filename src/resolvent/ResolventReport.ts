@@ -17,11 +17,17 @@ export interface ResolventReport {
   readonly requestedPrecision: number;
   /** How ε was split: the polynomial's share and the quantisation's share (fast inverse plus its propagation). */
   readonly split: { readonly polynomial: number; readonly quantisation: number };
-  /** K ≥ ‖M⁻¹‖ for the inverted operator M (I − F·B, or w − H). */
+  /** K ≥ ‖M⁻¹‖ for the inverted operator M (I − F·B', or w − H). */
   readonly conditionBound: number;
+  /** Where K comes from: the a-priori bound, or a caller's (e.g. an exact norm on a small model's sector). */
+  readonly conditionSource: 'a priori' | 'given';
+  /** The a-priori K: 1 + α_B'/|Im w| (preconditioned) or 1/|Im w| (direct). */
+  readonly aPrioriConditionBound: number;
+  /** b₀, the identity part of B moved into the shift of the fast inverse (0 on the direct route). */
+  readonly bShift: number;
   /** Bound on ‖M‖. */
   readonly normBoundM: number;
-  /** The bound used for ‖B‖ (preconditioned route): its Pauli 1-norm α_B. */
+  /** The bound used for ‖B'‖ = ‖B − b₀I‖ (preconditioned route): its Pauli 1-norm α_B'. */
   readonly normBoundB: number | null;
   readonly alphas: {
     readonly fastInverse: number | null;

@@ -9,6 +9,9 @@
  * e_F + (1 + e_F) s e_M α_M K/δ with e_M = (α_F α_B/α_M) e_F and s < δ, α_F ≤ 1/|Im w|, so F is built with precision
  * (ε/2)/(1 + 2 K α_B/|Im w|) — and what remains, (ε − e_F)/(1 + e_F) − e_M α_M K, for the polynomial (99 %; 1 % for the
  * phase residual).
+ * B's identity part is moved into the shift first (B = b₀I + B', w − H = (w − b₀) − A − B'; Babbush et al., Phys. Rev. X 8,
+ * 041015, 2018, drop the identity term of an LCU the same way): F is the fast inverse at w − b₀ and M = I − F·B', which
+ * lowers α_B, hence K and α_M, by |b₀|; `B` below is B'.
  * Direct: M = w − H as directShift builds it (α = |w| + α_H, exact), K = 1/|Im w|, all of ε (99 %) for the polynomial.
  * When the fast inverse, at its register cap, leaves nothing of ε for the polynomial, the plan throws — or, with
  * `reachablePrecision`, plans for the smallest precision it allows instead, 2(e_F + (1 + e_F) e_M α_M K) (half for the
@@ -21,9 +24,13 @@ import { identityEncoding } from '../blocks/combine/identityEncoding.js';
 import { linearCombination } from '../blocks/combine/linearCombination.js';
 import { productEncoding } from '../blocks/combine/productEncoding.js';
 import { shiftedEncoding } from '../blocks/combine/shiftedEncoding.js';
+import { pauliLcu } from '../blocks/builders/pauliLcu.js';
 import { fastInverse, type FastInverseEncoding, type FastInverseOptions } from '../inversion/fastInverse.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
+import { jordanWigner } from '../operators/jordanWigner.js';
+import { modelHamiltonian } from '../operators/modelHamiltonian.js';
+import { simplifyPauli } from '../operators/simplifyPauli.js';
 import { inverseDelta } from '../qsvt/qsvtInverse.js';
 import { oneBodyA } from './internal/oneBodyA.js';
 import type { ResolventRoute } from './ResolventReport.js';
@@ -51,10 +58,22 @@ export interface ResolventOptions {
    * costing; the report states both). Default false.
    */
   readonly reachablePrecision?: boolean;
+  /**
+   * A caller's rigorous K ≥ ‖M⁻¹‖, used when it is below the a-priori bound (the report says which): for the preconditioned
+   * route ‖(w − H)⁻¹ (w − b₀ − A)‖ on the electron window (M⁻¹ = (w − H)⁻¹(w − b₀ − A); requires `electrons`, so that M = I
+   * outside it), for the direct route ‖(w − H)⁻¹‖ on the whole Fock space. Small models can compute it exactly.
+   */
+  readonly conditionBound?: number;
   readonly label?: string;
 }
 
 export interface ResolventPlan {
+  /** b₀: the identity part of B moved into the shift (preconditioned route; 0 for the direct route). */
+  readonly shift: number;
+  /** 'a priori': 1 + ‖B'‖/|Im w| with ‖B'‖ ≤ α_B' (preconditioned) or 1/|Im w| (direct); 'given': options.conditionBound. */
+  readonly conditionSource: 'a priori' | 'given';
+  /** The a-priori K, reported beside a given one. */
+  readonly aPrioriConditionBound: number;
   readonly M: BlockEncoding;
   readonly F: FastInverseEncoding | null;
   readonly B: BlockEncoding | null;
@@ -71,6 +90,8 @@ export interface ResolventPlan {
 }
 
 const POLYNOMIAL_SHARE = 0.99;
+/** Smallest ε planned for: QSP phases reach residuals of ~1e-14 and the polynomial's error is measured to ~1e-12. */
+export const MIN_PRECISION = 1e-10;
 
 /** The model's Pauli-LCU encodings (H, A, B) per model: they do not depend on w or ε, so repeated plans build them once. */
 const encodingsPerModel = new WeakMap<FermionModel, ModelEncodings>();
@@ -81,10 +102,44 @@ function encodingsOf(model: FermionModel): ModelEncodings {
   return encodings;
 }
 
+/** B without its identity part: the encoding of B' = B − b₀I and the shift b₀ (real, B being Hermitian). */
+interface ShiftedB {
+  readonly encoding: BlockEncoding;
+  readonly shift: number;
+}
+
+const shiftedBPerModel = new WeakMap<FermionModel, ShiftedB>();
+
+/** b₀, the identity coefficient of the model's B that the preconditioned route moves into the shift. */
+export function identityShiftOfB(model: FermionModel): number {
+  return shiftedBOf(model).shift;
+}
+
+function shiftedBOf(model: FermionModel): ShiftedB {
+  let shifted = shiftedBPerModel.get(model);
+  if (!shifted) {
+    const sum = simplifyPauli(jordanWigner(modelHamiltonian(model, { part: 'B' }), model.modes));
+    const identity = sum.terms.find((t) => t.x === 0n && t.z === 0n);
+    const rest = { qubits: sum.qubits, terms: sum.terms.filter((t) => t !== identity) };
+    shifted = { encoding: pauliLcu(rest, "B' (two-body, identity moved into w)"), shift: identity?.re ?? 0 };
+    shiftedBPerModel.set(model, shifted);
+  }
+  return shifted;
+}
+
 function windowOf(electrons: ResolventOptions['electrons'], modes: number): { min: number; max: number } | null {
   if (electrons === undefined) return null;
   const [min, max] = typeof electrons === 'number' ? [electrons, electrons] : electrons;
   return min === 0 && max === modes ? null : { min, max };
+}
+
+/** K: the a-priori bound, or the caller's when it is valid and smaller. */
+function conditionOf(aPriori: number, options: ResolventOptions, caller: string, windowed: boolean): { K: number; source: 'a priori' | 'given'; aPriori: number } {
+  const given = options.conditionBound;
+  if (given === undefined) return { K: aPriori, source: 'a priori', aPriori };
+  if (!(Number.isFinite(given) && given >= 1)) throw new RangeError(`${caller}: conditionBound ${given} is not a finite number ≥ 1 (‖M⁻¹‖ ≥ 1 here)`);
+  if (!windowed) throw new RangeError(`${caller}: a given conditionBound needs the electron window it was computed on (option electrons)`);
+  return given < aPriori ? { K: given, source: 'given', aPriori } : { K: aPriori, source: 'a priori', aPriori };
 }
 
 /**
@@ -97,30 +152,32 @@ export function planResolvent(model: FermionModel, w: ComplexScalar, options: Re
   if (!Number.isFinite(w.re) || !Number.isFinite(w.im) || w.im === 0) {
     throw new RangeError(`${caller}: w = ${w.re}${w.im < 0 ? '' : '+'}${w.im}i must be finite with Im w ≠ 0`);
   }
-  if (!(epsilon > 0 && epsilon < 1)) throw new RangeError(`${caller}: precision ε = ${epsilon} is not in (0, 1)`);
+  if (!(epsilon >= MIN_PRECISION && epsilon < 1)) {
+    throw new RangeError(`${caller}: precision ε = ${epsilon} is not in [${MIN_PRECISION}, 1): phase factors and the measured polynomial error are certified to about 1e-12`);
+  }
   const eta = Math.abs(w.im);
   if (options.route === 'direct') {
     // directShift's construction (w·I − H by shiftedEncoding) on the model's H built once.
     const M = shiftedEncoding(encodingsOf(model).H, w, 'w - H');
-    const K = 1 / eta;
+    const { K, source, aPriori } = conditionOf(1 / eta, options, caller, true);
     return {
-      M, F: null, B: null, H: M, conditionBound: K, normBoundM: M.alpha, delta: inverseDelta(M.alpha, K, M.errorBound), precision: epsilon,
+      shift: 0, conditionSource: source, aPrioriConditionBound: aPriori, M, F: null, B: null, H: M, conditionBound: K, normBoundM: M.alpha, delta: inverseDelta(M.alpha, K, M.errorBound), precision: epsilon,
       split: { polynomial: epsilon, quantisation: 0 }, polynomialError: POLYNOMIAL_SHARE * epsilon, window: null,
     };
   }
   if (options.route !== 'preconditioned') throw new RangeError(`${caller}: unknown route "${String(options.route)}"`);
-  const B = encodingsOf(model).B;
-  const K = 1 + B.alpha / eta;
-  const quantisation = epsilon / 2;
+  const { encoding: B, shift } = shiftedBOf(model);
   const window = windowOf(options.electrons, model.modes);
-  const F = fastInverse(oneBodyA(model), w, {
+  const { K, source, aPriori } = conditionOf(1 + B.alpha / eta, options, caller, window !== null);
+  const quantisation = epsilon / 2;
+  const F = fastInverse(oneBodyA(model), { re: w.re - shift, im: w.im }, {
     ...options.fastInverse,
     precision: quantisation / (1 + (2 * K * B.alpha) / eta),
     ...(window ? { electrons: [window.min, window.max] as const } : {}),
     label: '(w - A)^-1',
   });
-  const FB = productEncoding([F, B], '(w - A)^-1 B');
-  const M = linearCombination([{ coefficient: { re: 1, im: 0 }, encoding: identityEncoding(model.modes) }, { coefficient: { re: -1, im: 0 }, encoding: FB }], 'I - (w - A)^-1 B');
+  const FB = productEncoding([F, B], "(w - b0 - A)^-1 B'");
+  const M = linearCombination([{ coefficient: { re: 1, im: 0 }, encoding: identityEncoding(model.modes) }, { coefficient: { re: -1, im: 0 }, encoding: FB }], "I - (w - b0 - A)^-1 B'");
   const eF = F.errorBound;
   const register = `${F.registerBits}-bit energy register${F.bitsCapped ? ', capped' : ''}`;
   if (!(1 / (M.alpha * K) - M.errorBound > 0)) {
@@ -142,7 +199,7 @@ export function planResolvent(model: FermionModel, w: ComplexScalar, options: Re
   // Reachable precision: half for the quantisation (what F already costs), half for the polynomial.
   const quantisationShare = planned === epsilon ? quantisation : planned / 2;
   return {
-    M, F, B, H: null, conditionBound: K, normBoundM: 1 + B.alpha / eta, delta: inverseDelta(M.alpha, K, M.errorBound), precision: planned,
+    shift, conditionSource: source, aPrioriConditionBound: aPriori, M, F, B, H: null, conditionBound: K, normBoundM: 1 + B.alpha / eta, delta: inverseDelta(M.alpha, K, M.errorBound), precision: planned,
     split: { polynomial: planned - quantisationShare, quantisation: quantisationShare }, polynomialError: Math.min(share(planned), 0.5), window,
   };
 }

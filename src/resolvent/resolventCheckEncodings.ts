@@ -31,8 +31,8 @@ export interface ResolventCheckPlan {
   readonly route: ResolventOptions['route'];
   readonly w: ComplexScalar;
   readonly electrons: number;
-  /** @throws RangeError as resolventEncoding. */
-  readonly build: () => ResolventEncoding;
+  /** Builds the row, with `overrides` (e.g. a window and a condition bound) on top of its options. @throws RangeError as resolventEncoding. */
+  readonly build: (overrides?: Pick<ResolventOptions, 'electrons' | 'conditionBound'>) => ResolventEncoding;
 }
 
 /**
@@ -47,12 +47,13 @@ export function resolventCheckPlans(model: FermionModel, options: ResolventCheck
   const plan = (route: ResolventOptions['route'], w: ComplexScalar, N: number, part: string): ResolventCheckPlan => {
     const label = `inverse, ${route} (${part})`;
     const electrons = sector(N);
-    const build = () =>
+    const build = (overrides: Pick<ResolventOptions, 'electrons' | 'conditionBound'> = {}) =>
       resolventEncoding(model, w, {
         ...options.resolvent,
         route,
         precision,
         ...(options.window === true && route === 'preconditioned' ? { electrons } : {}),
+        ...overrides,
         label,
       });
     return { label, route, w, electrons, build };

@@ -4,12 +4,21 @@
  */
 import { seededRandom } from '../core/seededRandom.js';
 
+/** Shots between two progress reports. */
+export const PROGRESS_INTERVAL = 2 ** 16;
+
 /**
  * Draws `shots` outcomes x with probability probabilities[x] / Σ probabilities (inverse-CDF
- * sampling, one uniform double per shot) and returns the count of each outcome. Throws RangeError
- * for a negative or non-finite weight, an all-zero distribution or a bad shot count.
+ * sampling, one uniform double per shot) and returns the count of each outcome; `onProgress(done, shots)`
+ * is called every PROGRESS_INTERVAL shots and at the end. Throws RangeError for a negative or non-finite
+ * weight, an all-zero distribution or a bad shot count.
  */
-export function sampleOutcomes(probabilities: ArrayLike<number>, shots: number, seed: number): Float64Array {
+export function sampleOutcomes(
+  probabilities: ArrayLike<number>,
+  shots: number,
+  seed: number,
+  onProgress?: (done: number, total: number) => void,
+): Float64Array {
   if (!Number.isSafeInteger(shots) || shots < 0) throw new RangeError(`sampleOutcomes: shots ${shots} is not a non-negative integer`);
   const cumulative = new Float64Array(probabilities.length);
   let total = 0;
@@ -33,6 +42,8 @@ export function sampleOutcomes(probabilities: ArrayLike<number>, shots: number, 
       else lo = mid + 1;
     }
     counts[lo] += 1;
+    if (onProgress !== undefined && (s + 1) % PROGRESS_INTERVAL === 0) onProgress(s + 1, shots);
   }
+  onProgress?.(shots, shots);
   return counts;
 }

@@ -19,7 +19,7 @@ import { StateVector } from '../sim/StateVector.js';
 import { applyUnitaryOps } from '../sim/applyUnitaryOps.js';
 import { adjointMatrix } from '../linalg/adjointMatrix.js';
 import { encodingCheck, judge, skippedRow, type CheckRow, type CheckThresholds } from './encodingCheck.js';
-import type { ReferenceOperator } from './verifyEncoding.js';
+import { onZeroAncillas, type ReferenceOperator } from './verifyEncoding.js';
 import { applyFockOperator, adjointFockTerms, modelFockTerms, type FockTerm } from './internal/fockOperatorMatrix.js';
 import { gaussianUnitaryMatrix, minor } from './internal/gaussianUnitaryMatrix.js';
 import { unitaryEncoding } from './unitaryEncoding.js';
@@ -27,7 +27,7 @@ import { unitaryEncoding } from './unitaryEncoding.js';
 /** Widest block (system + ancillas) the check simulates: a state of 2^20 amplitudes. */
 export const MAX_SIMULATED_QUBITS = 20;
 /** Default for the most amplitude updates (simulated states × 2^width × gates) one row may cost: seconds of simulation. */
-export const MAX_SIMULATION_WORK = 2 ** 33;
+export const MAX_SIMULATION_WORK = 2 ** 36;
 /** States verifyEncoding simulates for a probe row: 8 probes and 8 power-iteration steps of two simulations each. */
 const PROBE_SIMULATIONS = 8 + 2 * 8;
 /** Widest block verifyEncoding checks column by column by default. */
@@ -76,14 +76,16 @@ export function fockReference(terms: readonly FockTerm[], modes: number): Refere
 export function checkItem(item: CheckItem, thresholds: CheckLimits): CheckRow {
   const { encoding } = item;
   const width = encoding.systemQubits + ancillaQubits(encoding);
-  if (width > MAX_SIMULATED_QUBITS) {
-    return skippedRow(encoding, `${width} qubits exceed the simulation limit of ${MAX_SIMULATED_QUBITS}`);
+  // The simulator leaves idle work qubits out of the state, so the limits apply to the qubits it keeps.
+  const stateQubits = onZeroAncillas(encoding, {}).stateQubits;
+  if (stateQubits > MAX_SIMULATED_QUBITS) {
+    return skippedRow(encoding, `${stateQubits} simulated qubits (of ${width}) exceed the simulation limit of ${MAX_SIMULATED_QUBITS}`);
   }
   if (item.reference === undefined && encoding.systemQubits > MAX_EXACT_SYSTEM_QUBITS) {
     return skippedRow(encoding, `no reference operator above ${MAX_EXACT_SYSTEM_QUBITS} system qubits`);
   }
   const simulations = item.columns?.length ?? (width <= EXHAUSTIVE_LIMIT ? 2 ** encoding.systemQubits : PROBE_SIMULATIONS);
-  const work = simulations * 2 ** width * Math.max(1, totalGates(blockCounts(encoding.block)));
+  const work = simulations * 2 ** stateQubits * Math.max(1, totalGates(blockCounts(encoding.block)));
   const limit = thresholds.maxSimulationWork ?? MAX_SIMULATION_WORK;
   if (work > limit) return skippedRow(encoding, `simulation work ${work.toExponential(1)} amplitude updates exceeds the limit ${limit.toExponential(1)}`);
   return encodingCheck(encoding, { tolerance: thresholds.tolerance, precision: thresholds.precision }, {

@@ -74,6 +74,14 @@ export function skippedRow(encoding: BlockEncoding, reason: string): CheckRow {
   return { ...rowBase(encoding), maxError: null, unitarityDeviation: null, method: 'skipped', verdict: 'skipped', passed: false, reason };
 }
 
+/** A row whose encoding could not be built at all (e.g. a polynomial degree beyond its cap); the reason says why. */
+export function unbuiltRow(label: string, systemQubits: number, reason: string): CheckRow {
+  return {
+    label, systemQubits, ancillaQubits: 0, alpha: Number.NaN, errorBound: Number.NaN, gates: {}, costNotes: [],
+    maxError: null, unitarityDeviation: null, method: 'skipped', verdict: 'skipped', passed: false, reason,
+  };
+}
+
 export function encodingCheck(encoding: BlockEncoding, thresholds: CheckThresholds | number, options: VerifyOptions = {}): CheckRow {
   const limits = typeof thresholds === 'number' ? { tolerance: thresholds, precision: Infinity } : thresholds;
   const report = verifyEncoding(encoding, options);

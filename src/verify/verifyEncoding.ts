@@ -87,7 +87,7 @@ export function denseReference(M: ComplexMatrix): ReferenceOperator {
 }
 
 /** U (or U†) compiled for inputs |x>_system ⊗ |0>_ancillas; ancillas that only native kernels use stay out of the state. */
-function onZeroAncillas(encoding: BlockEncoding, options: SimulationOptions, inverse = false): BlockOnZeroAncillas {
+export function onZeroAncillas(encoding: BlockEncoding, options: SimulationOptions, inverse = false): BlockOnZeroAncillas {
   const n = encoding.systemQubits;
   const idleZero = Array.from({ length: encoding.block.qubits - n }, (_, k) => n + k);
   return prepareBlockOnZeroAncillas(encoding.block, { ...options, idleZero, inverse });

@@ -19,13 +19,15 @@ describe('polewright check MODEL', () => {
     expect(result.stdout).not.toContain('FAIL');
   });
 
-  it('--json prints { ok, z, tolerance, precision, E0, blocks[label, …, passed, method, verdict] }', () => {
+  it('--json prints { tool, version, command, inputs, ok, z, tolerance, precision, E0, blocks[label, …, passed, method, verdict] }', () => {
     const result = runCli(['check', MODEL, '--json']);
     expect(result.status).toBe(0);
     const report = JSON.parse(result.stdout);
-    expect(Object.keys(report)).toEqual(['ok', 'z', 'tolerance', 'precision', 'E0', 'blocks']);
+    expect(Object.keys(report)).toEqual(['tool', 'version', 'command', 'inputs', 'ok', 'z', 'tolerance', 'precision', 'E0', 'blocks']);
+    expect(report).toMatchObject({ tool: 'polewright', command: 'check', inputs: { file: MODEL } });
     expect(report).toMatchObject({ ok: true, z: { re: 0, im: 0.1 }, tolerance: 1e-10, precision: 1e-3 });
-    expect(report.blocks).toHaveLength(3 * 2 + 6 + 4);
+    // Ladder operators, H, A, B, the orbital rotations, the Slater determinant, four inversion rows, four QSVT inverse rows.
+    expect(report.blocks).toHaveLength(3 * 2 + 6 + 4 + 4);
     for (const block of report.blocks) {
       expect(Object.keys(block)).toEqual([
         'label', 'systemQubits', 'ancillaQubits', 'alpha', 'maxError', 'errorBound', 'gates', 'costNotes', 'passed', 'method', 'verdict',

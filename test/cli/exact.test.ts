@@ -1,12 +1,15 @@
 // polewright exact: summary, --json shape, files written (deterministic), bad options → exit 2 naming the option,
-// spin multiplets counted whole unless the file fixes spin, error bounds in every output.
+// spin multiplets counted whole unless the file fixes spin, error bounds in every output, the JSON header and
+// extra fields (residual, G0, A(ω)), --out written as one folder that replaces an earlier one whole.
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { exactCommand } from '../../src/cli/commands/exact.js';
 import { isInputError } from '../../src/core/InputError.js';
+import { VERSION } from '../../src/core/version.js';
+import { expectClose } from '../helpers/close.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'polewright-exact-'));
 const dimer = join(dir, 'dimer.json');
@@ -76,9 +79,17 @@ describe('polewright exact', () => {
     const out = await capture(() => exactCommand(dimer, { json: true, grid: '-1:1:3', pairs: '0:0,0:1', eta: '0.2' }));
     const obj = JSON.parse(out);
     expect(Object.keys(obj)).toEqual([
+      'tool', 'version', 'command', 'inputs', 'model', 'residual',
       'groundEnergy', 'degeneracy', 'gap', 'electrons', 'modes', 'spinSectors', 'spin', 'groundSectors',
-      'broadening', 'tolerance', 'frequencies', 'entries', 'selfEnergy', 'errors',
+      'broadening', 'tolerance', 'frequencies', 'entries', 'selfEnergy', 'nonInteracting', 'spectral', 'errors',
     ]);
+    expect([obj.tool, obj.version, obj.command, obj.model]).toEqual(['polewright', VERSION, 'exact', 'dimer']);
+    expect(obj.inputs).toEqual({ file: dimer, broadening: 0.2, grid: { from: -1, to: 1, points: 3 }, pairs: [[0, 0], [0, 1]], tolerance: 1e-6 });
+    expect(obj.residual).toBeGreaterThanOrEqual(0);
+    expect(obj.residual).toBeLessThan(1e-6);
+    expect(obj.nonInteracting.entries.map((e: { i: number; j: number }) => [e.i, e.j])).toEqual([[0, 0], [0, 1]]);
+    expect(obj.spectral.entries.map((e: { i: number }) => e.i)).toEqual([0]);
+    expect(obj.errors.residual).toMatch(/H psi - E0 psi/);
     expect(obj.spinSectors).toBe('fixed');
     expect(obj.spin).toBe(0);
     expect(obj.selfEnergy).toBeNull();
@@ -105,6 +116,49 @@ describe('polewright exact', () => {
     await capture(() => exactCommand(dimer, { out: outDir }));
     const second = ['green.json', 'green.csv', 'spectral.svg', 'selfenergy.svg'].map((f) => readFileSync(join(outDir, f), 'utf8'));
     expect(second).toEqual(first);
+  });
+
+  it('--json gives A_ii = −Im G_ii/π with bounds δG/π, and G0 = G for a model without interaction', async () => {
+    const quadratic = join(dir, 'quadratic.json');
+    writeFileSync(quadratic, JSON.stringify({ modes: 2, electrons: 1, oneBody: [[0, 0, -1], [1, 1, 1], [0, 1, 0.5], [1, 0, 0.5]], grid: { from: -2, to: 2, points: 5 } }));
+    const obj = JSON.parse(await capture(() => exactCommand(quadratic, { json: true })));
+    // Spectral function A(ω) = −(1/π) Im G(ω + iη) (CONVENTIONS.md, standard definition).
+    const g00 = obj.entries.find((e: { i: number; j: number }) => e.i === 0 && e.j === 0);
+    const a0 = obj.spectral.entries.find((e: { i: number }) => e.i === 0);
+    g00.values.forEach(([, im]: [number, number], k: number) => expectClose(a0.values[k], -im / Math.PI, 1e-15));
+    g00.bounds.forEach((b: number, k: number) => expectClose(a0.bounds[k], b / Math.PI, 1e-15 * Math.max(1, b)));
+    // Non-interacting limit G(z) = (z − T)⁻¹ = G0(z) (CONVENTIONS.md; Fetter & Walecka, free propagator).
+    obj.entries.forEach((e: { values: [number, number][]; bounds: number[] }, x: number) => {
+      e.values.forEach(([re, im], k) => {
+        const [re0, im0] = obj.nonInteracting.entries[x].values[k];
+        expectClose(re, re0, 1e-9 + e.bounds[k]!);
+        expectClose(im, im0, 1e-9 + e.bounds[k]!);
+      });
+    });
+  });
+
+  it('--out replaces an earlier folder whole (no stale selfenergy.svg after a --pairs rerun) and says so on stderr', async () => {
+    const outDir = join(dir, 'rerun');
+    await capture(() => exactCommand(dimer, { out: outDir, grid: '-1:1:5' }));
+    expect(readdirSync(outDir).sort()).toEqual(['green.csv', 'green.json', 'selfenergy.svg', 'spectral.svg']);
+    let stderr = '';
+    vi.spyOn(process.stderr, 'write').mockImplementation((chunk: string | Uint8Array) => {
+      stderr += String(chunk);
+      return true;
+    });
+    await capture(() => exactCommand(dimer, { out: outDir, grid: '-1:1:5', pairs: '0:0' }));
+    expect(readdirSync(outDir).sort()).toEqual(['green.csv', 'green.json', 'spectral.svg']);
+    expect(stderr).toContain(`replaced the earlier contents of "${outDir}" with this run's 3 files`);
+    expect(readdirSync(dir).filter((name) => name.includes('.tmp') || name.includes('.old'))).toEqual([]);
+  });
+
+  it('--out refuses, before solving, a folder holding files exact does not write, and a path through a file', async () => {
+    const mine = join(dir, 'mine');
+    mkdirSync(mine);
+    writeFileSync(join(mine, 'notes.txt'), 'keep me');
+    expect(await inputErrorOf(() => exactCommand(dimer, { out: mine }))).toMatch(/--out: ".*mine" holds files exact does not write \(notes\.txt\)/);
+    expect(readFileSync(join(mine, 'notes.txt'), 'utf8')).toBe('keep me');
+    expect(await inputErrorOf(() => exactCommand(dimer, { out: join(dimer, 'sub') }))).toMatch(/is not a folder/);
   });
 
   it('counts a doublet twice and averages both S_z sectors unless the file fixes spin, and says which', async () => {
@@ -136,7 +190,8 @@ describe('polewright exact', () => {
   it('refuses grids beyond the model scale or with too many points, naming --grid', async () => {
     expect(await inputErrorOf(() => exactCommand(dimer, { grid: '-1e308:1e308:11' }))).toMatch(/--grid: from and to must lie within/);
     expect(await inputErrorOf(() => exactCommand(dimer, { grid: '-1:1:1000000000' }))).toMatch(/--grid .*points must be an integer from 1 to 100000/);
-    expect(await inputErrorOf(() => exactCommand(dimer, { eta: '1e308' }))).toMatch(/--eta must lie from/);
+    expect(await inputErrorOf(() => exactCommand(dimer, { eta: '1e308' }))).toMatch(/--eta must lie from 1e-9 to 1000000, got "1e308"/);
+    expect(await inputErrorOf(() => exactCommand(dimer, { eta: '1e400' }))).toBe('--eta must lie from 1e-9 to 1000000, got "1e400" (beyond the double range, ±1.8e308)');
   });
 
   it('names the option in the error for bad --eta, --grid and --pairs', async () => {
@@ -157,7 +212,7 @@ describe('polewright exact', () => {
     expect(JSON.parse(ok.stdout).degeneracy).toBe(1);
     const bad = spawnSync(tsx, [main, 'exact', dimer, '--eta', '-0.5'], { encoding: 'utf8' });
     expect(bad.status).toBe(2);
-    expect(bad.stderr).toMatch(/--eta must be greater than 0/);
+    expect(bad.stderr).toMatch(/--eta must lie from 1e-9 to 1000000, got "-0\.5"/);
     const missing = spawnSync(tsx, [main, 'exact', join(dir, 'nope.json')], { encoding: 'utf8' });
     expect(missing.status).toBe(2);
   }, 60000);

@@ -93,4 +93,11 @@ describe('parseModel(input, source) rejects bad input with an InputError naming 
     expect(messageOf({ ...base, split: { oneBodyInB: [[0, 9]] } })).toBe('model.json: split.oneBodyInB[0][1]: index 9 out of range 0..5');
     expect(messageOf({ ...base, split: { oneBodyInB: [[0, 1]] } })).toBe('model.json: split.oneBodyInB[0]: T[0][1] is zero; there is nothing to move');
   });
+
+  it('a value nested too deeply to print, or a huge one, is named without overflowing the stack (fuzz corpus finding)', () => {
+    let nested: unknown = 1;
+    for (let k = 0; k < 20_000; k++) nested = [nested];
+    expect(messageOf({ ...base, electrons: nested })).toBe('model.json: electrons: expected number, got a value nested too deeply to show');
+    expect(messageOf({ ...base, electrons: new Array<number>(100_000).fill(0) }).length).toBeLessThan(200);
+  });
 });

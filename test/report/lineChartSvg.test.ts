@@ -8,6 +8,7 @@ const chart = {
   title: 'test chart',
   xTitle: 'ω (model energy units)',
   yTitle: 'A(ω) (1/energy)',
+  seriesTitle: 'diagonal entry A_ii',
   series: [
     { name: 'A_00', x: [0, 1, 2], y: [1, 3, 2] },
     { name: 'A_11', x: [0, 1, 2], y: [2, 1, 0] },
@@ -19,6 +20,17 @@ describe('lineChartSvg(chart)', () => {
     const svg = await lineChartSvg(chart);
     expect(svg.startsWith('<svg')).toBe(true);
     for (const text of ['ω (model energy units)', 'A(ω) (1/energy)', 'A_00', 'A_11', 'test chart']) expect(svg).toContain(text);
+  });
+
+  it('titles the colour legend with seriesTitle and the style legend with styleTitle', async () => {
+    const series = [
+      { name: 'Re Σ_0', group: 'Σ_0', style: 'Re', x: [0, 1], y: [0, 1] },
+      { name: 'Im Σ_0', group: 'Σ_0', style: 'Im', x: [0, 1], y: [1, 0] },
+    ];
+    const svg = await lineChartSvg({ ...chart, series, styles: ['Re', 'Im'], seriesTitle: 'diagonal entry Σ_ii', styleTitle: 'part of Σ_ii' });
+    expect(svg).toContain('diagonal entry Σ_ii');
+    expect(svg).toContain('part of Σ_ii');
+    expect(svg).not.toContain('>series<');
   });
 
   it('is deterministic: the same chart gives the same bytes', async () => {

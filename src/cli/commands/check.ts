@@ -8,10 +8,12 @@ import { loadModelFile } from '../../model/loadModelFile.js';
 import { describeModel } from '../../model/describeModel.js';
 import { checkModelBlocks } from '../../verify/checkModelBlocks.js';
 import { inversionCheckItems } from '../../verify/inversionCheckItems.js';
+import { resolventCheckRows } from '../../verify/resolventCheckRows.js';
 import { groundLevel } from '../../exact/groundLevel.js';
 import { InputError } from '../../core/InputError.js';
 import type { CheckRow } from '../../verify/encodingCheck.js';
 import { formatCheckTable } from '../format/formatCheckTable.js';
+import { jsonHeader } from '../format/jsonHeader.js';
 import { parseComplexOption, parsePositiveNumber } from '../options.js';
 
 interface CheckOptions {
@@ -41,7 +43,7 @@ interface ReportHeader {
   readonly E0: number;
 }
 
-function jsonReport(header: ReportHeader, rows: readonly CheckRow[]): string {
+function jsonReport(file: string, header: ReportHeader, rows: readonly CheckRow[]): string {
   const blocks = rows.map((r) => ({
     label: r.label,
     systemQubits: r.systemQubits,
@@ -57,7 +59,8 @@ function jsonReport(header: ReportHeader, rows: readonly CheckRow[]): string {
     ...(r.powerIteration ? { powerIteration: r.powerIteration } : {}),
     ...(r.reason === undefined ? {} : { reason: r.reason }),
   }));
-  return `${JSON.stringify({ ...header, blocks }, null, 2)}\n`;
+  const inputs = { file, z: header.z, tolerance: header.tolerance, precision: header.precision };
+  return `${JSON.stringify({ ...jsonHeader('check', inputs), ...header, blocks }, null, 2)}\n`;
 }
 
 /** Adds `check MODEL [--json] [--tolerance τ] [--precision ε] [--z re,im]` to the program. */
@@ -78,10 +81,10 @@ export function registerCheckCommand(program: Command): void {
       const z = given ?? { re: (model.grid.from + model.grid.to) / 2, im: model.broadening };
       const E0 = groundLevel(model).energy;
       const extra = inversionCheckItems(model, { E0, z, fastInverse: { precision } });
-      const rows = checkModelBlocks(model, { tolerance, precision, extra });
+      const rows = [...checkModelBlocks(model, { tolerance, precision, extra }), ...resolventCheckRows(model, { E0, z }, { tolerance, precision })];
       const ok = rows.every((r) => r.verdict === 'pass' || r.verdict === 'skipped');
       const header = { ok, z, tolerance, precision, E0 };
-      process.stdout.write(options.json ? jsonReport(header, rows) : formatCheckTable(describeModel(model), header, rows));
+      process.stdout.write(options.json ? jsonReport(file, header, rows) : formatCheckTable(describeModel(model), header, rows));
       if (!ok) process.exitCode = 1;
     });
 }

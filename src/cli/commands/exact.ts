@@ -2,14 +2,16 @@
  * The `exact` command: solves a model exactly (ground level over every S_z sector unless the model file
  * fixes `spin`, G_ij on the frequency grid with truncation bounds, self-energy with a propagated bound),
  * prints a summary or the JSON object, and with --out writes green.json, green.csv, spectral.svg and
- * selfenergy.svg. A ground level Lanczos cannot certify is reported with exit code 1.
+ * selfenergy.svg as one folder that replaces any earlier one whole. A ground level Lanczos cannot certify
+ * is reported with exit code 1.
  */
-import { join } from 'node:path';
+import { accessSync, constants, existsSync, readdirSync, statSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import cliProgress from 'cli-progress';
 import type { Command } from 'commander';
+import { ensureDirectory } from '../../core/ensureDirectory.js';
 import { InputError } from '../../core/InputError.js';
-import { writeFileAtomic } from '../../core/writeFileAtomic.js';
-import { accessSync, constants, mkdirSync } from 'node:fs';
+import { writeFolderAtomic } from '../../core/writeFolderAtomic.js';
 import { isConvergenceError } from '../../exact/ConvergenceError.js';
 import { DEFAULT_GREEN_TOLERANCE } from '../../exact/greensFunction.js';
 import { solveExact, type ExactSolution } from '../../exact/solveExact.js';
@@ -17,9 +19,14 @@ import { describeModel } from '../../model/describeModel.js';
 import type { FermionModel, FrequencyGrid } from '../../model/FermionModel.js';
 import { loadModelFile } from '../../model/loadModelFile.js';
 import { energyScale, gridProblem, MAX_BROADENING, MAX_GRID_POINTS, MIN_BROADENING } from '../../model/modelLimits.js';
-import { greenCsv, greenJson } from '../../report/greenTables.js';
+import { greenCsv } from '../../report/greenTables.js';
 import { exactPlots } from '../../report/exactPlots.js';
-import { parsePositiveNumber } from '../options.js';
+import { exactJson } from '../format/exactJson.js';
+import { plural } from '../format/plural.js';
+import { parseNumberInRange } from '../options.js';
+
+/** The files --out may write; a folder holding anything else is not replaced. */
+export const OUTPUT_FILES = ['green.json', 'green.csv', 'spectral.svg', 'selfenergy.svg'] as const;
 
 /** Accepted --tolerance range: below 1e-14 the bound cannot beat rounding in G; above 0.1 it says little. */
 export const TOLERANCE_RANGE = [1e-14, 0.1] as const;
@@ -86,12 +93,12 @@ function summary(model: FermionModel, s: ExactSolution, notes: readonly string[]
   const spin = s.sector.up === null ? 'all S_z' : `${s.sector.up} up, ${s.sector.down} down`;
   const lines = [
     `model: ${describeModel(model)}`,
-    `sector: ${s.sector.electrons} electrons (${spin}), dimension ${s.sector.dimension}`,
+    `sector: ${plural(s.sector.electrons, 'electron')} (${spin}), dimension ${s.sector.dimension}`,
     spinLine(s),
     `ground energy: ${s.groundEnergy.toPrecision(12)} (residual ${s.residual.toExponential(2)})`,
     `degeneracy: ${s.degeneracy}`,
     `gap: ${s.gap === null ? 'none (no other level in the sector)' : s.gap.toPrecision(10)}`,
-    `green's function: ${s.green.length} entries at ${s.frequencies.length} frequencies, broadening ${s.broadening}`,
+    `green's function: ${plural(s.green.length, 'entry', 'entries')} at ${plural(s.frequencies.length, 'frequency', 'frequencies')}, broadening ${s.broadening}`,
     `  error: |δG_ij| ≤ ${bound(Math.max(0, ...s.greenBound))} over all entries and frequencies ` +
       `(rigorous continued-fraction truncation bound; tolerance ${s.tolerance} of max |G|)`,
     s.selfEnergyBound === null
@@ -104,45 +111,53 @@ function summary(model: FermionModel, s: ExactSolution, notes: readonly string[]
   return `${lines.join('\n')}\n`;
 }
 
-/** Creates DIR (and parents) and checks it is writable before any work is done. */
-function prepareOutputDirectory(dir: string): void {
+/**
+ * Checks before any work that --out can be written: its parent folder exists or can be created and is
+ * writable, and DIR is new or holds only files an earlier run wrote (it is replaced whole).
+ */
+function prepareOutputFolder(dir: string): void {
+  const target = resolve(dir);
+  ensureDirectory(dirname(target));
   try {
-    mkdirSync(dir, { recursive: true });
-    accessSync(dir, constants.W_OK);
+    accessSync(dirname(target), constants.W_OK);
   } catch (error) {
     throw new InputError(`--out: cannot write to "${dir}": ${(error as Error).message}`);
   }
+  if (!existsSync(target)) return;
+  if (!statSync(target).isDirectory()) throw new InputError(`--out: "${dir}" exists and is not a folder`);
+  const others = readdirSync(target).filter((name) => !(OUTPUT_FILES as readonly string[]).includes(name));
+  if (others.length > 0) {
+    const shown = others.slice(0, 3).join(', ') + (others.length > 3 ? ', …' : '');
+    throw new InputError(
+      `--out: "${dir}" holds files exact does not write (${shown}); --out replaces the whole folder, ` +
+        'so give a new folder or one an earlier exact run wrote',
+    );
+  }
 }
 
-/** Renders every output first, then writes each file atomically, so a rendering failure writes nothing. */
-async function writeOutputs(dir: string, s: ExactSolution, notes: string[]): Promise<void> {
-  const files: [string, string][] = [
-    ['green.json', `${JSON.stringify(greenJson(s))}\n`],
+/** Renders every output first, then writes the folder in one step, so a failure leaves the earlier folder as it was. */
+async function writeOutputs(dir: string, json: string, model: FermionModel, s: ExactSolution, notes: string[]): Promise<void> {
+  const files = new Map<string, string>([
+    ['green.json', json],
     ['green.csv', greenCsv(s)],
-  ];
-  const plots = await exactPlots(s);
-  for (const [name, svg] of [['spectral.svg', plots.spectral], ['selfenergy.svg', plots.selfEnergy]] as const) {
-    if (svg !== null) files.push([name, svg]);
-  }
+  ]);
+  const plots = await exactPlots(s, model.name);
+  if (plots.spectral !== null) files.set('spectral.svg', plots.spectral);
+  if (plots.selfEnergy !== null) files.set('selfenergy.svg', plots.selfEnergy);
   notes.push(...plots.notes);
-  for (const [name, content] of files) writeFileAtomic(join(dir, name), content);
-  notes.push(`wrote: ${files.map(([name]) => join(dir, name)).join(', ')}`);
+  const { replaced } = writeFolderAtomic(dir, files);
+  if (replaced) process.stderr.write(`polewright: replaced the earlier contents of "${dir}" with this run's ${plural(files.size, 'file')}\n`);
+  notes.push(`wrote: ${[...files.keys()].map((name) => `${dir}/${name}`).join(', ')}`);
 }
 
 /** Parses --tolerance: a number within TOLERANCE_RANGE. */
 export function parseTolerance(text: string): number {
-  const value = parsePositiveNumber('--tolerance', text);
-  const [low, high] = TOLERANCE_RANGE;
-  if (value < low || value > high) throw new InputError(`--tolerance must lie from ${low} to ${high}, got "${text}"`);
-  return value;
+  return parseNumberInRange('--tolerance', text, ...TOLERANCE_RANGE);
 }
 
 /** Runs `polewright exact` in-process: writes to stdout (and stderr for progress and convergence failures). */
 export async function exactCommand(file: string, options: ExactCommandOptions): Promise<void> {
-  const eta = options.eta === undefined ? undefined : parsePositiveNumber('--eta', options.eta);
-  if (eta !== undefined && (eta < MIN_BROADENING || eta > MAX_BROADENING)) {
-    throw new InputError(`--eta must lie from ${MIN_BROADENING} to ${MAX_BROADENING}, got "${options.eta}"`);
-  }
+  const eta = options.eta === undefined ? undefined : parseNumberInRange('--eta', options.eta, MIN_BROADENING, MAX_BROADENING);
   const grid = options.grid === undefined ? undefined : parseGrid(options.grid);
   const tolerance = options.tolerance === undefined ? undefined : parseTolerance(options.tolerance);
   const model = loadModelFile(file);
@@ -151,7 +166,7 @@ export async function exactCommand(file: string, options: ExactCommandOptions): 
     if (wrong !== undefined) throw new InputError(`--grid: ${wrong}`);
   }
   const pairs = options.pairs === undefined ? undefined : parsePairs(options.pairs, model.modes);
-  if (options.out !== undefined) prepareOutputDirectory(options.out);
+  if (options.out !== undefined) prepareOutputFolder(options.out);
   const bar = process.stderr.isTTY
     ? new cliProgress.SingleBar({ stream: process.stderr, format: 'exact |{bar}| {value}/{total} continued fractions' }, cliProgress.Presets.shades_classic)
     : null;
@@ -180,9 +195,10 @@ export async function exactCommand(file: string, options: ExactCommandOptions): 
   } finally {
     if (started) bar!.stop();
   }
+  const json = `${JSON.stringify(exactJson(file, model, solution, grid ?? model.grid))}\n`;
   const notes: string[] = [];
-  if (options.out !== undefined) await writeOutputs(options.out, solution, notes);
-  process.stdout.write(options.json === true ? `${JSON.stringify(greenJson(solution))}\n` : summary(model, solution, notes));
+  if (options.out !== undefined) await writeOutputs(options.out, json, model, solution, notes);
+  process.stdout.write(options.json === true ? json : summary(model, solution, notes));
 }
 
 /** Adds `exact MODEL [--out DIR] [--json] [--eta η] [--grid from:to:points] [--pairs i:j,...] [--tolerance τ]`. */
@@ -191,9 +207,9 @@ export function registerExactCommand(program: Command): void {
     .command('exact')
     .description("exact reference: ground level, Green's function, self-energy and spectral function of a model")
     .argument('<model>', 'model file (JSON)')
-    .option('--out <dir>', 'write green.json, green.csv (columns omega,i,j,re,im,bound), spectral.svg and selfenergy.svg')
+    .option('--out <dir>', 'write green.json, green.csv (columns omega,i,j,re,im,bound), spectral.svg and selfenergy.svg as one folder (an earlier one is replaced whole)')
     .option('--json', 'print the result as one JSON object instead of the summary')
-    .option('--eta <eta>', "broadening η > 0 (default: the model file's)")
+    .option('--eta <eta>', `broadening η, ${MIN_BROADENING} to ${MAX_BROADENING} (default: the model file's)`)
     .option('--grid <from:to:points>', "frequency grid (default: the model file's)")
     .option('--pairs <i:j,...>', 'entries G_ij to compute (default: all n²)')
     .option(

@@ -19,11 +19,11 @@ export function formatCheckTable(
       r.label,
       String(r.systemQubits),
       String(r.ancillaQubits),
-      r.alpha.toPrecision(6),
-      String(totalOf(r.gates)),
+      Number.isNaN(r.alpha) ? '-' : r.alpha.toPrecision(6),
+      Number.isNaN(r.alpha) ? '-' : String(totalOf(r.gates)),
       r.maxError === null ? '-' : r.maxError.toExponential(2),
       r.powerIteration ? `${r.powerIteration.estimate.toExponential(2)} (${r.powerIteration.iterations} it.)` : '-',
-      r.errorBound === 0 ? 'exact' : r.errorBound.toExponential(2),
+      Number.isNaN(r.errorBound) ? '-' : r.errorBound === 0 ? '0 (exact construction)' : r.errorBound.toExponential(2),
       r.method,
       RESULT[r.verdict],
     ]),
@@ -39,8 +39,12 @@ export function formatCheckTable(
     'max error: largest entry error of <0_anc|U|0_anc> against the reference M/α (exhaustive: every column; columns: the\n' +
     'listed basis columns; probe (lower bound): random states, which may miss the worst direction; state: prepared\n' +
     'amplitudes against the Slater determinant of the decomposition\'s V). norm estimate: power iteration on E†E,\n' +
-    'E = <0|U|0> − M/α, a lower estimate of the operator-norm error. bound: the block\'s error bound, "exact" when the\n' +
-    'construction has none. A row passes when its error is within max(tolerance, bound) and its bound within the\n' +
-    'precision; a bound above the precision is INCONCLUSIVE; a skipped row is too large to check (reason above).\n' +
+    'E = <0|U|0> − M/α, a lower estimate of the operator-norm error. bound: the block\'s error bound, "0 (exact\n' +
+    'construction)" when the construction is exact up to rounding. A row passes when its error is within\n' +
+    'max(tolerance, bound) and its bound within the precision; a bound above the precision is INCONCLUSIVE; a skipped\n' +
+    'row is too large to check (reason above). Blocks: the fast inverse block-encodes (w − A)⁻¹ with A the one-body\n' +
+    'part, the direct shift w − H, each at the particle shift w = z + E0 and the hole shift w = E0 − z. Verdicts:\n' +
+    'pass = within the thresholds; failed = an error beyond them was found; INCONCLUSIVE = the bound is too loose to\n' +
+    'decide; skipped = too large to simulate.\n' +
     'Exit 0 when every row passed or was skipped, 1 otherwise.\n';
 }

@@ -38,17 +38,21 @@ function describe(text: string, at: number): string {
   return at >= text.length ? 'end of input' : JSON.stringify(text[at]);
 }
 
-function value(text: string, at: number): number {
+/** Deepest nesting of arrays and objects followed; deeper text is reported rather than overflowing the stack. */
+export const DEEPEST_NESTING = 1000;
+
+function value(text: string, at: number, depth = 0): number {
   const c = text[at];
-  if (c === '{') return container(text, at, '}', true);
-  if (c === '[') return container(text, at, ']', false);
+  if ((c === '{' || c === '[') && depth >= DEEPEST_NESTING) throw new Syntax(at, `arrays and objects nested deeper than ${DEEPEST_NESTING} levels`);
+  if (c === '{') return container(text, at, '}', true, depth + 1);
+  if (c === '[') return container(text, at, ']', false, depth + 1);
   if (c === '"') return string(text, at);
   if (c === '-' || (c !== undefined && c >= '0' && c <= '9')) return number(text, at);
   for (const word of ['true', 'false', 'null']) if (text.startsWith(word, at)) return at + word.length;
   throw new Syntax(at, `expected a value, found ${describe(text, at)}`);
 }
 
-function container(text: string, at: number, close: string, isObject: boolean): number {
+function container(text: string, at: number, close: string, isObject: boolean, depth: number): number {
   at = skipSpace(text, at + 1);
   if (text[at] === close) return at + 1;
   for (;;) {
@@ -58,7 +62,7 @@ function container(text: string, at: number, close: string, isObject: boolean): 
       if (text[at] !== ':') throw new Syntax(at, `expected ':' after the key, found ${describe(text, at)}`);
       at = skipSpace(text, at + 1);
     }
-    at = skipSpace(text, value(text, at));
+    at = skipSpace(text, value(text, at, depth));
     if (text[at] === close) return at + 1;
     if (text[at] !== ',') throw new Syntax(at, `expected ',' or '${close}', found ${describe(text, at)}`);
     at = skipSpace(text, at + 1);

@@ -15,9 +15,24 @@ export function zodProblems(error: z.ZodError): Problem[] {
   return problems;
 }
 
+/** Longest shown form of an offending value; a huge array is cut, not printed whole. */
+const LONGEST_SHOWN = 80;
+
+/** The value as JSON for a message, cut to LONGEST_SHOWN characters; a value too deeply nested to stringify is named so. */
+function shown(value: unknown): string {
+  let text: string;
+  try {
+    text = JSON.stringify(value);
+  } catch (error) {
+    if (error instanceof RangeError) return 'a value nested too deeply to show';
+    throw error;
+  }
+  return text.length > LONGEST_SHOWN ? `${text.slice(0, LONGEST_SHOWN - 1)}…` : text;
+}
+
 function describeIssue(issue: z.core.$ZodIssue): string {
   const hasInput = 'input' in issue && issue.input !== undefined;
-  const got = hasInput ? `, got ${JSON.stringify(issue.input)}` : '';
+  const got = hasInput ? `, got ${shown(issue.input)}` : '';
   switch (issue.code) {
     case 'invalid_type':
       if (!hasInput) return 'required field is missing';

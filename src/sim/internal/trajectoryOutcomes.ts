@@ -11,7 +11,16 @@ import { moveOneToZero, project, scale, weightOfOne } from './collapse.js';
 import { flattenForSimulation } from './flattenForSimulation.js';
 import { outcomeKey } from './outcomeKey.js';
 
-export function trajectoryOutcomes(circuit: Circuit, qubits: number, bits: number, shots: number, seed: number, options: SimulationOptions): Map<string, number> {
+/** `onProgress(done, shots)` is called after every shot. */
+export function trajectoryOutcomes(
+  circuit: Circuit,
+  qubits: number,
+  bits: number,
+  shots: number,
+  seed: number,
+  options: SimulationOptions,
+  onProgress?: (done: number, total: number) => void,
+): Map<string, number> {
   const random = seededRandom(seed);
   const counts = new Map<string, number>();
   for (let shot = 0; shot < shots; shot++) {
@@ -31,6 +40,7 @@ export function trajectoryOutcomes(circuit: Circuit, qubits: number, bits: numbe
     }
     const key = outcomeKey(record);
     counts.set(key, (counts.get(key) ?? 0) + 1);
+    onProgress?.(shot + 1, shots);
   }
   return counts;
 }

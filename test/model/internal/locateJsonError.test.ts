@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { locateJsonError } from '../../../src/model/internal/locateJsonError.js';
+import { DEEPEST_NESTING, locateJsonError } from '../../../src/model/internal/locateJsonError.js';
 
 const isJson = (text: string): boolean => {
   try {
@@ -27,5 +27,10 @@ describe('locateJsonError(text)', () => {
   it('counts lines and columns from 1', () => {
     expect(locateJsonError('[1,\n 2 3]')).toEqual({ line: 2, column: 4, reason: "expected ',' or ']', found \"3\"" });
     expect(locateJsonError('')).toEqual({ line: 1, column: 1, reason: 'expected a value, found end of input' });
+  });
+
+  it('reports nesting beyond DEEPEST_NESTING instead of overflowing the stack (fuzz corpus finding)', () => {
+    const text = `${'['.repeat(20_000)}1${']'.repeat(19_999)}`;
+    expect(locateJsonError(text)).toEqual({ line: 1, column: DEEPEST_NESTING + 1, reason: `arrays and objects nested deeper than ${DEEPEST_NESTING} levels` });
   });
 });

@@ -1,0 +1,25 @@
+// The seeded fuzz sample of the `polewright` CLI: mutated model files, OpenQASM programs and options from circuits/
+// must end in a result or an InputError — no internal error, no input left without an answer, no memory overrun.
+// The full corpus (10 000 inputs, every command) is scripts/fuzz-cli.ts.
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+import { FAILURE_CLASSES, runFuzzCorpus } from './runFuzzCorpus.js';
+
+const CIRCUITS = fileURLToPath(new URL('../../circuits', import.meta.url));
+
+/** The commands quick enough on the seed models for CI; check and build simulate whole encodings and stay in the script. */
+const SAMPLED_COMMANDS = ['run', 'exact', 'cost', 'estimate', 'verify'];
+
+describe('polewright CLI on a seeded fuzz sample', () => {
+  it('300 mutated inputs (corpus seed 20240601) give no internal error, timeout or memory overrun', async () => {
+    const summary = await runFuzzCorpus({ circuitsFolder: CIRCUITS, corpusSeed: 20240601, count: 300, commands: SAMPLED_COMMANDS });
+    const failures = summary.results
+      .filter((r) => FAILURE_CLASSES.includes(r.fuzzClass))
+      .map((r) => `#${r.input.index} ${r.input.command} ${r.fuzzClass}: ${r.stderr.trim()} (${r.input.description.join('; ')}; replay ${r.savedTo})`);
+    expect(summary.results).toHaveLength(300);
+    expect(failures).toEqual([]);
+    // The sample must reach both outcomes, or the mutations are too weak or too strong to test anything.
+    expect(summary.results.some((r) => r.fuzzClass === 'ok')).toBe(true);
+    expect(summary.results.some((r) => r.fuzzClass === 'input-error')).toBe(true);
+  });
+});
