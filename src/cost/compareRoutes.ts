@@ -52,7 +52,7 @@ export function compareRoutes(model: FermionModel, options: CompareOptions): Rou
     `Toffoli = ${toffoliT} T (${toffoliT === 4 ? 'measurement-based uncomputation, Jones 2013 / Gidney 2018' : 'Amy et al. 2013'}); multi-controlled gates: ${options.multiControl ?? 'measured'} ladder (src/cost/decompositionTable.ts).`,
     'SELECT of every LCU costed by unary iteration (Babbush et al. 2018), L - 1 Toffolis; PREPARE as simulated (uniformly controlled rotations).',
     `Shots: plain sampling ceil(alpha^2/eps_s^2) per test (one standard error); amplitude estimation 2M + 1 controlled-U calls with M from ${AMPLITUDE_ESTIMATION_SOURCE} (success probability 8/pi^2).`,
-    "Circuits are the resolvent stage's own (src/resolvent/resolventCost.ts): the real QSVT sequence with placeholder phases (counted as arbitrary rotations), its degree the Childs-Kothari-Somma truncation bound (an upper bound on the built degree), times the fast inverse on the preconditioned route; K and delta from ||(w - H)^-1|| <= 1/eta and ||B|| <= Pauli 1-norm of B.",
+    "Circuits are the resolvent stage's own (src/resolvent/resolventCost.ts): the real QSVT sequence with placeholder phases (counted as arbitrary rotations), its degree the Childs-Kothari-Somma truncation bound (an upper bound on the built degree), times the fast inverse on the preconditioned route; K and delta from ||(w - H)^-1|| <= 1/eta and ||B'|| <= Pauli 1-norm of B' = B - b0 I (B's identity part moved into w); the fast inverse's flag rotation pruned to dyadic intervals (O(log ||A||) rotations).",
   ];
   return { routes, groundEnergy, groundEnergySource: given ? 'given' : 'lower bound', assumptions };
 }

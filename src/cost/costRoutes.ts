@@ -31,7 +31,10 @@ const REPLAN_MARGIN = 0.98;
 
 function plan(model: FermionModel, w: ComplexScalar, route: RouteName, options: RouteOptions): ResolventCost {
   const window = route === 'preconditioned' ? { electrons: options.electrons } : {};
-  const at = (precision: number): ResolventCost => resolventCost(model, w, { route, precision, reachablePrecision: true, ...window });
+  // The pruned flag rotation (one multi-controlled rotation per dyadic interval of register values) costs O(log ‖A‖);
+  // the exact multiplexor the simulation prefers for small registers costs 2^m rotations, i.e. grows like ‖A‖/Δ.
+  const at = (precision: number): ResolventCost =>
+    resolventCost(model, w, { route, precision, reachablePrecision: true, fastInverse: { flagRotation: 'pruned' }, ...window });
   let epsilon = Math.min(MAX_BLOCK_PRECISION, options.precision);
   let cost = at(epsilon);
   for (let k = 1; k < MAX_PLANS && cost.report.errorBoundOperator > options.precision && cost.report.precision === epsilon; k++) {
@@ -47,7 +50,7 @@ function notes(cost: ResolventCost, target: number): string[] {
     `alpha_M = ${r.alphas.M.toPrecision(4)}; K = ${r.conditionBound.toPrecision(4)}; delta = ${r.delta.toExponential(2)}; degree ${r.degree} (truncation bound); bound on the encoding ${r.errorBoundOperator.toExponential(2)} (operator units)`,
   ];
   if (r.fastInverseBits !== null) {
-    lines.push(`fast inverse: ${r.fastInverseBits}-bit energy register, alpha = ${r.alphas.fastInverse!.toPrecision(4)}, bound ${r.errorParts.fastInverse.toExponential(2)}; ||B|| <= alpha_B = ${r.alphas.B!.toPrecision(4)}`);
+    lines.push(`fast inverse: ${r.fastInverseBits}-bit energy register, alpha = ${r.alphas.fastInverse!.toPrecision(4)}, bound ${r.errorParts.fastInverse.toExponential(2)}; ||B'|| <= alpha_B' = ${r.alphas.B!.toPrecision(4)} (B' = B - b0 I, b0 = ${r.bShift.toPrecision(4)} moved into w)`);
   }
   if (r.precision !== r.requestedPrecision || r.errorBoundOperator > target) {
     lines.push(`PRECISION NOT MET: the encoding's error on G is bounded by ${r.errorBoundOperator.toExponential(2)} > the target ${target.toExponential(2)} (the fast inverse's register cap limits it); the figures are for that precision`);
