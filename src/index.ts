@@ -45,7 +45,7 @@ export { spectralFunction } from './exact/spectralFunction.js';
 export { lehmannForm } from './exact/lehmannForm.js';
 export { solveExact } from './exact/solveExact.js';
 
-export type { BlockEncoding, AncillaRegister, CostNote } from './blocks/BlockEncoding.js';
+export type { BlockEncoding, AncillaRegister, AncillaRole, CostNote } from './blocks/BlockEncoding.js';
 export { productEncoding } from './blocks/combine/productEncoding.js';
 export { linearCombination } from './blocks/combine/linearCombination.js';
 export { adjointEncoding } from './blocks/combine/adjointEncoding.js';
@@ -71,10 +71,31 @@ export { fourierConstantAdder } from './arithmetic/fourierConstantAdder.js';
 export { cuccaroAdder } from './arithmetic/cuccaroAdder.js';
 export { rippleConstantAddition } from './arithmetic/rippleConstantAddition.js';
 
+export { singularValueDecomposition } from './linalg/singularValues.js';
+export { matrixFunctionOfSingularValues } from './linalg/singularValueTransform.js';
+
+export type { ChebyshevSeries } from './polynomial/ChebyshevSeries.js';
+export { evaluateChebyshev } from './polynomial/evaluateChebyshev.js';
+export { chebyshevInterpolant } from './polynomial/chebyshevInterpolant.js';
+export { measureSupNorm } from './polynomial/measureSupNorm.js';
+export { inverseApproximation, type InverseApproximation } from './polynomial/inverseApproximation.js';
+export { qspPhases, qspMatrixElement, type QspPhases } from './polynomial/qspPhases.js';
+
 export { fastInverse, type FastInverseEncoding, type FastInverseOptions } from './inversion/fastInverse.js';
 export { directShift } from './inversion/directShift.js';
 export { greensShifts, type GreensShifts } from './inversion/greensShifts.js';
 export { oneBodyOfA } from './inversion/oneBodyOfA.js';
+
+export { qsvtEncoding } from './qsvt/qsvtEncoding.js';
+export { qsvtInverse } from './qsvt/qsvtInverse.js';
+export { qsvtInverseStructure } from './qsvt/qsvtInverseStructure.js';
+export { reflectionPhases } from './qsvt/reflectionPhases.js';
+
+export { resolventEncoding, type ResolventEncoding, type ResolventOptions } from './resolvent/resolventEncoding.js';
+export { resolventCost } from './resolvent/resolventCost.js';
+export { planResolvent } from './resolvent/planResolvent.js';
+export type { ResolventReport, ResolventRoute } from './resolvent/ResolventReport.js';
+export { UnreachablePrecisionError } from './resolvent/UnreachablePrecisionError.js';
 
 export type { ResolventFactory } from './readout/ResolventFactory.js';
 export type { InitialState, StateAmplitudes } from './readout/InitialState.js';
@@ -96,6 +117,8 @@ export { expectationOfBlock } from './sim/expectationOfBlock.js';
 export { circuitMatrix } from './sim/circuitMatrix.js';
 export { outcomeDistribution } from './sim/outcomeDistribution.js';
 export { registerNativeKernel, type NativeKernel } from './sim/registerNativeKernel.js';
+export type { NativeKernelSpec, NativeKernelTable } from './sim/NativeKernelSpec.js';
+export { prepareBlockOnZeroAncillas, simulateBlockOnZeroAncillas } from './sim/simulateBlockOnZeroAncillas.js';
 
 export { writeQasm } from './qasm/writeQasm.js';
 export { parseQasm } from './qasm/parseQasm.js';
@@ -103,3 +126,17 @@ export { QasmParseError, isQasmParseError } from './qasm/QasmParseError.js';
 
 export { verifyEncoding } from './verify/verifyEncoding.js';
 export { checkModelBlocks } from './verify/checkModelBlocks.js';
+export { cleanRegisterLeak } from './verify/cleanRegisterLeak.js';
+export { verifyCircuit } from './verify/verifyCircuit.js';
+export { unitaryQasmCircuit } from './verify/unitaryQasmCircuit.js';
+export { loadOperatorFile } from './operatorFile/loadOperatorFile.js';
+export { parseOperatorFile } from './operatorFile/parseOperatorFile.js';
+export { operatorFileJson } from './operatorFile/operatorFileJson.js';
+export type { TargetOperator } from './operatorFile/TargetOperator.js';
+
+export { compareRoutes } from './cost/compareRoutes.js';
+export { greenCost } from './cost/greenCost.js';
+export { structuredBlockCounts, structuredCircuitCounts } from './cost/structuredCounts.js';
+export { collectOverrides, defaultOverrideRules } from './cost/collectOverrides.js';
+export { resourceTotals } from './cost/resourceTotals.js';
+export { tGatesPerRotation } from './cost/rotationSynthesis.js';
