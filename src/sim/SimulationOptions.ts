@@ -2,6 +2,7 @@
  * SimulationOptions: the options every simulator entry point takes.
  */
 import type { NativeKernelTable } from './NativeKernelSpec.js';
+import type { SimulatorPool } from './SimulatorPool.js';
 
 export interface SimulationOptions {
   /** Apply native kernels to blocks that name one (default true); false expands every block. */
@@ -10,4 +11,8 @@ export interface SimulationOptions {
   readonly nativeKernels?: NativeKernelTable;
   /** Byte limit for state allocations; default: POLEWRIGHT_MEMORY_LIMIT or the machine's available memory. */
   readonly memoryLimitBytes?: number;
+  /** Merge runs of gates into dense or diagonal passes on a few qubits (default true; exact to rounding). */
+  readonly fuse?: boolean;
+  /** Worker threads to split gate passes of large states over (see SimulatorPool); default: this thread only. */
+  readonly pool?: SimulatorPool;
 }

@@ -7,8 +7,7 @@ import { qubitCount } from '../circuit/CircuitBuilder.js';
 import type { Circuit } from '../circuit/types.js';
 import type { SimulationOptions } from './SimulationOptions.js';
 import type { StateVector } from './StateVector.js';
-import { compileCircuit } from './internal/compileProgram.js';
-import { kernelLookup } from './internal/kernelLookup.js';
+import { compileCircuit, compileTarget } from './internal/compileProgram.js';
 import { runProgram } from './internal/runProgram.js';
 
 /**
@@ -19,6 +18,6 @@ import { runProgram } from './internal/runProgram.js';
 export function applyCircuit(state: StateVector, circuit: Circuit, options: SimulationOptions = {}): void {
   const needed = qubitCount(circuit);
   if (state.qubits < needed) throw new RangeError(`applyCircuit: the circuit has ${needed} qubits, the state only ${state.qubits}`);
-  const program = compileCircuit(circuit, { stateQubits: state.qubits, kernels: kernelLookup(options) }, 'applyCircuit');
-  runProgram(program, state);
+  const program = compileCircuit(circuit, compileTarget(state.qubits, options), 'applyCircuit');
+  runProgram(program, state, options.pool);
 }

@@ -9,7 +9,7 @@ import { InputError } from '../core/InputError.js';
 import { ensureFits } from '../core/memoryBudget.js';
 import type { SimulationOptions } from './SimulationOptions.js';
 import { MAX_QUBITS, StateVector, stateVectorBytes } from './StateVector.js';
-import { compileCall } from './internal/compileProgram.js';
+import { compileCall, compileTarget } from './internal/compileProgram.js';
 import { kernelLookup } from './internal/kernelLookup.js';
 import { makeProgram, type Program, type Step } from './internal/Program.js';
 import { runProgram } from './internal/runProgram.js';
@@ -66,7 +66,7 @@ export function prepareBlockOnZeroAncillas(block: Block, options: ZeroAncillaOpt
   ensureFits(stateVectorBytes(stateQubits), `a ${stateQubits}-qubit state vector`, options.memoryLimitBytes);
   const steps: Step[] = [];
   const args = options.args ?? [];
-  compileCall(block, args, { bits, controls: [], negControls: [], inverse: options.inverse ?? false, times: 1 }, { stateQubits, kernels }, steps);
+  compileCall(block, args, { bits, controls: [], negControls: [], inverse: options.inverse ?? false, times: 1 }, compileTarget(stateQubits, options), steps);
   const program: Program = makeProgram(steps, stateQubits);
   const inputPlace = Int32Array.from({ length: 2 ** inputQubits.length }, (_, u) => {
     let index = 0;
@@ -100,13 +100,13 @@ export function prepareBlockOnZeroAncillas(block: Block, options: ZeroAncillaOpt
         state.re[inputPlace[u]!] = inputRe[u]!;
         state.im[inputPlace[u]!] = inputIm[u]!;
       }
-      runProgram(program, state);
+      runProgram(program, state, options.pool);
       return state;
     },
     runBasis(index) {
       if (!Number.isInteger(index) || index < 0 || index >= inputPlace.length) throw new RangeError(`BlockOnZeroAncillas.runBasis: index ${index} out of range`);
       const state = StateVector.basis(stateQubits, inputPlace[index]!, sizeOptions);
-      runProgram(program, state);
+      runProgram(program, state, options.pool);
       return state;
     },
     stateIndex,

@@ -15,7 +15,7 @@ import { oneBodyOfA } from '../inversion/oneBodyOfA.js';
 import { oneBodyRotation, type OneBodyRotation } from '../rotations/oneBodyRotation.js';
 import { slaterDeterminant } from '../rotations/slaterDeterminant.js';
 import { blockCounts, countsToObject, totalGates } from '../circuit/gateCounts.js';
-import { StateVector } from '../sim/StateVector.js';
+import { MAX_QUBITS, StateVector } from '../sim/StateVector.js';
 import { applyUnitaryOps } from '../sim/applyUnitaryOps.js';
 import { adjointMatrix } from '../linalg/adjointMatrix.js';
 import { encodingCheck, judge, skippedRow, type CheckRow, type CheckThresholds } from './encodingCheck.js';
@@ -77,7 +77,7 @@ export function checkItem(item: CheckItem, thresholds: CheckLimits): CheckRow {
   const { encoding } = item;
   const width = encoding.systemQubits + ancillaQubits(encoding);
   // The simulator leaves idle work qubits out of the state, so the limits apply to the qubits it keeps.
-  const stateQubits = onZeroAncillas(encoding, {}).stateQubits;
+  const stateQubits = width > MAX_QUBITS ? width : onZeroAncillas(encoding, {}).stateQubits;
   if (stateQubits > MAX_SIMULATED_QUBITS) {
     return skippedRow(encoding, `${stateQubits} simulated qubits (of ${width}) exceed the simulation limit of ${MAX_SIMULATED_QUBITS}`);
   }

@@ -39,4 +39,19 @@ describe('StateVector', () => {
   it('refuses more than 30 qubits before allocating anything', () => {
     expect(() => StateVector.zero(31, { memoryLimitBytes: 1e15 })).toThrow(/maximum of 30/);
   });
+
+  it('lets 30 qubits (16 GiB) fit a 24 GiB budget and follows POLEWRIGHT_MEMORY_LIMIT before allocating', () => {
+    expect(stateVectorBytes(30)).toBeLessThan(24 * 2 ** 30);
+    expect(() => StateVector.zero(30, { memoryLimitBytes: 16 * 2 ** 30 - 1 })).toThrow(/30-qubit state vector needs 16\.00 GiB/);
+    const saved = process.env.POLEWRIGHT_MEMORY_LIMIT;
+    process.env.POLEWRIGHT_MEMORY_LIMIT = String(2 ** 20);
+    try {
+      expect(() => StateVector.zero(16)).toThrow(InputError);
+      expect(() => StateVector.zero(30)).toThrow(/30-qubit state vector needs 16\.00 GiB/);
+      expect(StateVector.zero(12).re.length).toBe(4096);
+    } finally {
+      if (saved === undefined) delete process.env.POLEWRIGHT_MEMORY_LIMIT;
+      else process.env.POLEWRIGHT_MEMORY_LIMIT = saved;
+    }
+  });
 });

@@ -1,7 +1,8 @@
 /**
  * Program: a compiled, replayable list of simulator steps on the bits of a state of fixed size —
  * gate kernels with their matrices and index patterns already resolved, prepared native-kernel
- * passes, and repeats of shared sub-programs (block bodies compiled once, called many times).
+ * passes, repeats of shared sub-programs (block bodies compiled once, called many times), and fused
+ * steps (a dense matrix or a diagonal on a few target bits, applied in one pass; see fuseSteps.ts).
  */
 import type { Matrix2 } from '../../circuit/standardGates.js';
 import type { StateVector } from '../StateVector.js';
@@ -23,6 +24,12 @@ export const SWAP = 5;
 export const NATIVE = 6;
 /** `program` run `times` times. */
 export const REPEAT = 7;
+/** Dense 2^t × 2^t matrix `dense` on bits `targets`, over the pattern (controls at their values, targets 0). */
+export const DENSE = 8;
+/** Diagonal `dense` (2^t complex entries) on bits `targets`, over the pattern (controls at their values, targets free). */
+export const DIAGONAL_TABLE = 9;
+/** The kernel steps of `program` (all on bits below log2 `stride`) applied tile by tile: blocks of `stride` amplitudes. */
+export const TILE = 10;
 
 /** One step; every step has all fields (one object shape keeps the replay loop monomorphic). */
 export interface Step {
@@ -32,6 +39,12 @@ export interface Step {
   readonly other: number;
   /** A Matrix2, or the leading numbers of a factor or swap phase. */
   readonly numbers: Matrix2;
+  /** State bits the step's matrix acts on, ascending (controls excluded; none for a phase). */
+  readonly targets: Int32Array;
+  /** DENSE: row-major interleaved (re, im) 2^t × 2^t matrix; DIAGONAL_TABLE: its 2^t diagonal entries. */
+  readonly dense: Float64Array;
+  /** DENSE: the state offset of each local target index (local bit k = targets[k]); DIAGONAL_TABLE: diagonalLowLookup(targets). */
+  readonly offsets: Int32Array;
   readonly pass: ((state: StateVector) => void) | null;
   readonly program: Program | null;
   readonly times: number;
@@ -46,6 +59,8 @@ export interface Program {
 }
 
 const NO_NUMBERS: Matrix2 = [0, 0, 0, 0, 0, 0, 0, 0];
+const NO_BITS = new Int32Array(0);
+const NO_ENTRIES = new Float64Array(0);
 
 export function makeStep(fields: Partial<Step> & { readonly code: number }): Step {
   return {
@@ -54,6 +69,9 @@ export function makeStep(fields: Partial<Step> & { readonly code: number }): Ste
     stride: fields.stride ?? 0,
     other: fields.other ?? 0,
     numbers: fields.numbers ?? NO_NUMBERS,
+    targets: fields.targets ?? NO_BITS,
+    dense: fields.dense ?? NO_ENTRIES,
+    offsets: fields.offsets ?? NO_BITS,
     pass: fields.pass ?? null,
     program: fields.program ?? null,
     times: fields.times ?? 1,

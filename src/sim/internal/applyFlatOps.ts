@@ -9,7 +9,7 @@ import { InputError } from '../../core/InputError.js';
 import type { SimulationOptions } from '../SimulationOptions.js';
 import type { StateVector } from '../StateVector.js';
 import { applyFlatGate } from './applyFlatGate.js';
-import { compileCall } from './compileProgram.js';
+import { compileCall, compileTarget } from './compileProgram.js';
 import { kernelLookup } from './kernelLookup.js';
 import { makeProgram, type Step } from './Program.js';
 import { runProgram } from './runProgram.js';
@@ -25,7 +25,7 @@ export function applyUnitaryStream(state: StateVector, ops: Iterable<FlatOp>, wh
         if (!kernels.find(op.block)) throw new RangeError(`${what}: no native kernel "${op.block.nativeKernel}" for block ${op.block.name}`);
         const steps: Step[] = [];
         const site = { bits: op.qubits, controls: op.controls, negControls: op.negControls, inverse: op.inverse, times: op.power };
-        compileCall(op.block, op.args, site, { stateQubits: state.qubits, kernels }, steps);
+        compileCall(op.block, op.args, site, compileTarget(state.qubits, options), steps);
         runProgram(makeProgram(steps, state.qubits), state);
         break;
       }

@@ -4,21 +4,41 @@
  * calls, integer powers as repeats, inverses, controls reaching only the action of a conjugated
  * block), resolves every gate to its kernel and index pattern once, and prepares native-kernel
  * passes once. Bodies and calls are cached per block and per (arguments, state bits, modifiers,
- * state size, kernel choice), so repeated calls, powers and later runs reuse them.
+ * state size, kernel choice, fusion), so repeated calls, powers and later runs reuse them. With
+ * fusion on, every program's runs of gates are merged by fuseSteps into dense or diagonal passes and
+ * runs on low bits grouped by tileSteps into cache-sized tiles.
  */
 import { evaluateAngle, type Angle } from '../../circuit/angle.js';
 import { resolveGate } from '../../circuit/resolveGate.js';
 import type { Block, Circuit, UnitaryOp } from '../../circuit/types.js';
 import { InputError } from '../../core/InputError.js';
+import type { SimulationOptions } from '../SimulationOptions.js';
+import { fuseSteps } from './fuseSteps.js';
 import { gateStep } from './gateStep.js';
-import type { KernelLookup } from './kernelLookup.js';
-import { makeProgram, makeStep, NATIVE, REPEAT, type Program, type Step } from './Program.js';
+import { tileSteps } from './tileSteps.js';
+import { kernelLookup, type KernelLookup } from './kernelLookup.js';
+import { makeProgram, makeStep, NATIVE, REPEAT, TILE, type Program, type Step } from './Program.js';
 import { runProgram } from './runProgram.js';
 
-/** What a program is compiled for: the state size and the native kernels in use. */
+/** What a program is compiled for: the state size, the native kernels in use and whether gate runs are fused. */
 export interface CompileTarget {
   readonly stateQubits: number;
   readonly kernels: KernelLookup;
+  readonly fuse: boolean;
+}
+
+/** The compile target of a state of `stateQubits` qubits under `options`. */
+export function compileTarget(stateQubits: number, options: SimulationOptions): CompileTarget {
+  return { stateQubits, kernels: kernelLookup(options), fuse: options.fuse !== false };
+}
+
+/** The program of `steps`, fused and tiled when the target asks for it. */
+function finish(steps: readonly Step[], target: CompileTarget): Program {
+  const n = target.stateQubits;
+  if (!target.fuse) return makeProgram(steps, n);
+  // Tiles of inlined sub-programs are opened again, so their steps fuse and tile with their neighbours.
+  const open = steps.flatMap((step) => (step.code === TILE ? (step.program as Program).steps : [step]));
+  return makeProgram(tileSteps(fuseSteps(open, n), n), n);
 }
 
 /** Sub-programs with at most this many steps are copied into their caller instead of referenced. */
@@ -51,7 +71,7 @@ function cached<K extends object>(cache: WeakMap<K, Map<string, Program>>, owner
 }
 
 function targetKey(target: CompileTarget): string {
-  return `${target.stateQubits}|${target.kernels.key}`;
+  return `${target.stateQubits}|${target.kernels.key}|${target.fuse ? 'fused' : 'plain'}`;
 }
 
 function mapBits(qubits: readonly number[], bits: readonly number[]): number[] {
@@ -114,7 +134,7 @@ function bodyProgram(block: Block, part: string, ops: readonly UnitaryOp[], ctx:
   return cached(blockCache, block, key, () => {
     const out: Step[] = [];
     compileOps(ops, ctx, target, out);
-    return makeProgram(out, target.stateQubits);
+    return finish(out, target);
   });
 }
 
@@ -122,7 +142,7 @@ function bodyProgram(block: Block, part: string, ops: readonly UnitaryOp[], ctx:
 export function compileCall(block: Block, args: readonly number[], site: CallSite, target: CompileTarget, out: Step[]): void {
   if (site.times === 0) return;
   const key = `${targetKey(target)}|call|${site.times}|${siteKey(args, site)}`;
-  emit(out, cached(blockCache, block, key, () => makeProgram(callSteps(block, args, site, target), target.stateQubits)), 1);
+  emit(out, cached(blockCache, block, key, () => finish(callSteps(block, args, site, target), target)), 1);
 }
 
 function callSteps(block: Block, args: readonly number[], site: CallSite, target: CompileTarget): Step[] {
@@ -143,9 +163,9 @@ function callSteps(block: Block, args: readonly number[], site: CallSite, target
       inverse: site.inverse, power: site.times, stateQubits: target.stateQubits,
       compileOps: (ops, bits, params, stateQubits) => {
         const steps: Step[] = [];
-        const sub = { stateQubits, kernels: target.kernels };
+        const sub = { ...target, stateQubits };
         compileOps(ops, { bits, params, controls: [], negControls: [], inverse: false }, sub, steps);
-        const program = makeProgram(steps, stateQubits);
+        const program = finish(steps, sub);
         return (state) => runProgram(program, state);
       },
     });
@@ -178,7 +198,7 @@ export function compileCircuit(circuit: Circuit, target: CompileTarget, what: st
       }
       compileOps([op], root, target, out);
     }
-    return makeProgram(out, target.stateQubits);
+    return finish(out, target);
   });
 }
 

@@ -22,7 +22,8 @@ export function gateStep(resolved: ResolvedGate, n: number): Step | null {
     if (resolved.phaseRe === 1 && resolved.phaseIm === 0) return null;
     const bitA = 1 << resolved.a;
     const pattern = indexPattern(n, [...fixedControls, resolved.a, resolved.b], controlValue | bitA);
-    return makeStep({ code: SWAP, pattern, stride: bitA, other: 1 << resolved.b, numbers: factor(resolved.phaseRe, resolved.phaseIm) });
+    const targets = Int32Array.from([resolved.a, resolved.b]).sort();
+    return makeStep({ code: SWAP, pattern, stride: bitA, other: 1 << resolved.b, numbers: factor(resolved.phaseRe, resolved.phaseIm), targets });
   }
   const m = resolved.matrix;
   const [ar, ai, br, bi, cr, ci, dr, di] = m;
@@ -37,8 +38,9 @@ export function gateStep(resolved: ResolvedGate, n: number): Step | null {
   const antiDiagonal = ar === 0 && ai === 0 && dr === 0 && di === 0;
   if (fixedControls.length === 0 && !diagonal && !antiDiagonal) {
     if (target < 0 || target >= n) throw new RangeError(`qubit ${target} out of range 0..${n - 1}`);
-    return makeStep({ code: STRIDE, stride, numbers: m });
+    return makeStep({ code: STRIDE, stride, numbers: m, targets: Int32Array.of(target) });
   }
   const pattern = indexPattern(n, [...fixedControls, target], controlValue);
-  return makeStep({ code: diagonal ? DIAGONAL : antiDiagonal ? ANTI_DIAGONAL : MATRIX, pattern, stride, numbers: m });
+  const code = diagonal ? DIAGONAL : antiDiagonal ? ANTI_DIAGONAL : MATRIX;
+  return makeStep({ code, pattern, stride, numbers: m, targets: Int32Array.of(target) });
 }

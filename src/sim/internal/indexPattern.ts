@@ -1,7 +1,9 @@
 /**
  * IndexPattern: the basis indices whose bits at some fixed positions have given values, enumerated
  * without scanning: the free bits count up, zeros are deposited at the fixed positions and the
- * fixed values ORed in. Below the lowest fixed position the indices form contiguous runs.
+ * fixed values ORed in. Below the lowest fixed position the indices form contiguous runs. Kernels
+ * over a pattern take a range [from, to) of the free-bit counter (default all outer · run of them),
+ * so one pass can be split between threads.
  */
 
 export interface IndexPattern {

@@ -1,54 +1,43 @@
 /**
- * runProgram: replays a compiled program on a state in place, dispatching each step to its kernel.
+ * runProgram: replays a compiled program on a state in place, dispatching each step to its kernel
+ * (applyStep), running native passes and repeating sub-programs. With a SimulatorPool and a state of
+ * at least PARALLEL_MIN_AMPLITUDES shared amplitudes, each kernel step is split over the pool's
+ * threads by index ranges (same arithmetic per amplitude, so the same result bit for bit).
  */
+import { PARALLEL_MIN_AMPLITUDES, type SimulatorPool } from '../SimulatorPool.js';
 import type { StateVector } from '../StateVector.js';
-import { applyAntiDiagonalPairs } from '../kernels/applyAntiDiagonalPairs.js';
-import { applyDiagonalPairs } from '../kernels/applyDiagonalPairs.js';
-import { applyMatrixPairs } from '../kernels/applyMatrixPairs.js';
-import { applyMatrixStride } from '../kernels/applyMatrixStride.js';
-import { applySwapPairs } from '../kernels/applySwapPairs.js';
-import { scaleMatching } from '../kernels/scaleMatching.js';
-import type { IndexPattern } from './indexPattern.js';
-import { ANTI_DIAGONAL, DIAGONAL, MATRIX, NATIVE, REPEAT, SCALE, STRIDE, SWAP, type Program } from './Program.js';
+import { applyStep, partRange, stepWork } from './applyStep.js';
+import { NATIVE, REPEAT, TILE, type Program, type Step } from './Program.js';
 
-export function runProgram(program: Program, state: StateVector): void {
+/** Steps with fewer work units than this run on the calling thread alone (a message costs more). */
+const MIN_SPLIT_WORK = 2 ** 14;
+
+export function runProgram(program: Program, state: StateVector, pool?: SimulatorPool): void {
   if (state.qubits !== program.stateQubits) {
     throw new RangeError(`runProgram: the program was compiled for ${program.stateQubits} qubits, the state has ${state.qubits}`);
   }
-  replay(program, state);
+  if (pool?.workers.closed) throw new RangeError('runProgram: the simulator pool is closed');
+  const shared = state.re.buffer instanceof SharedArrayBuffer && state.im.buffer instanceof SharedArrayBuffer;
+  replay(program, state, pool && shared && state.re.length >= PARALLEL_MIN_AMPLITUDES ? pool : null);
 }
 
-function replay(program: Program, state: StateVector): void {
+function replay(program: Program, state: StateVector, pool: SimulatorPool | null): void {
   const { re, im } = state;
   for (const step of program.steps) {
-    const m = step.numbers;
-    switch (step.code) {
-      case SCALE:
-        scaleMatching(re, im, step.pattern as IndexPattern, m[0], m[1]);
-        break;
-      case STRIDE:
-        applyMatrixStride(re, im, step.stride, m);
-        break;
-      case DIAGONAL:
-        applyDiagonalPairs(re, im, step.pattern as IndexPattern, step.stride, m[0], m[1], m[6], m[7]);
-        break;
-      case ANTI_DIAGONAL:
-        applyAntiDiagonalPairs(re, im, step.pattern as IndexPattern, step.stride, m[2], m[3], m[4], m[5]);
-        break;
-      case MATRIX:
-        applyMatrixPairs(re, im, step.pattern as IndexPattern, step.stride, m);
-        break;
-      case SWAP:
-        applySwapPairs(re, im, step.pattern as IndexPattern, step.stride, step.other, m[0], m[1]);
-        break;
-      case NATIVE:
-        (step.pass as (s: StateVector) => void)(state);
-        break;
-      case REPEAT:
-        for (let r = 0; r < step.times; r++) replay(step.program as Program, state);
-        break;
-      default:
-        throw new RangeError(`runProgram: unknown step code ${step.code}`);
+    if (step.code === NATIVE) (step.pass as (s: StateVector) => void)(state);
+    else if (step.code === REPEAT) for (let r = 0; r < step.times; r++) replay(step.program as Program, state, pool);
+    else {
+      const work = stepWork(step, re.length);
+      if (pool && (step.code === TILE ? work >= pool.threads : work >= MIN_SPLIT_WORK)) split(step, re, im, work, pool);
+      else applyStep(step, re, im, 0, work);
     }
   }
+}
+
+function split(step: Step, re: Float64Array, im: Float64Array, work: number, pool: SimulatorPool): void {
+  // Kernel steps hold no closures (pass is null), so the step itself is posted.
+  pool.workers.run({ step, re, im, work }, () => {
+    const [from, to] = partRange(step, work, 0, pool.threads);
+    applyStep(step, re, im, from, to);
+  });
 }

@@ -7,12 +7,16 @@ import { deposit, type IndexPattern } from '../internal/indexPattern.js';
 export function applyAntiDiagonalPairs(
   re: Float64Array, im: Float64Array, pattern: IndexPattern, stride: number,
   br: number, bi: number, cr: number, ci: number,
+  from = 0, to = pattern.outer * pattern.run,
 ): void {
-  const { positions, value, outer, run } = pattern;
+  const { positions, value, run } = pattern;
   const isX = br === 1 && bi === 0 && cr === 1 && ci === 0;
-  for (let o = 0; o < outer; o++) {
-    const start = deposit(o * run, positions) | value;
-    const end = start + run;
+  for (let x = from; x < to;) {
+    const offset = x & (run - 1);
+    const length = Math.min(run - offset, to - x);
+    const start = (deposit(x - offset, positions) | value) + offset;
+    const end = start + length;
+    x += length;
     if (isX) {
       for (let i = start; i < end; i++) {
         const j = i + stride;

@@ -7,11 +7,15 @@ import { deposit, type IndexPattern } from '../internal/indexPattern.js';
 export function applyDiagonalPairs(
   re: Float64Array, im: Float64Array, pattern: IndexPattern, stride: number,
   ar: number, ai: number, dr: number, di: number,
+  from = 0, to = pattern.outer * pattern.run,
 ): void {
-  const { positions, value, outer, run } = pattern;
-  for (let o = 0; o < outer; o++) {
-    const start = deposit(o * run, positions) | value;
-    const end = start + run;
+  const { positions, value, run } = pattern;
+  for (let x = from; x < to;) {
+    const offset = x & (run - 1);
+    const length = Math.min(run - offset, to - x);
+    const start = (deposit(x - offset, positions) | value) + offset;
+    const end = start + length;
+    x += length;
     for (let i = start; i < end; i++) {
       const j = i + stride;
       const xr = re[i]!;

@@ -5,12 +5,15 @@
 import type { Matrix2 } from '../../circuit/standardGates.js';
 import { deposit, type IndexPattern } from '../internal/indexPattern.js';
 
-export function applyMatrixPairs(re: Float64Array, im: Float64Array, pattern: IndexPattern, stride: number, m: Matrix2): void {
+export function applyMatrixPairs(re: Float64Array, im: Float64Array, pattern: IndexPattern, stride: number, m: Matrix2, from = 0, to = pattern.outer * pattern.run): void {
   const [ar, ai, br, bi, cr, ci, dr, di] = m;
-  const { positions, value, outer, run } = pattern;
-  for (let o = 0; o < outer; o++) {
-    const start = deposit(o * run, positions) | value;
-    const end = start + run;
+  const { positions, value, run } = pattern;
+  for (let x = from; x < to;) {
+    const offset = x & (run - 1);
+    const length = Math.min(run - offset, to - x);
+    const start = (deposit(x - offset, positions) | value) + offset;
+    const end = start + length;
+    x += length;
     for (let i = start; i < end; i++) {
       const j = i + stride;
       const xr = re[i]!;

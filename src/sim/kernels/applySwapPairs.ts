@@ -8,17 +8,21 @@ import { deposit, type IndexPattern } from '../internal/indexPattern.js';
 export function applySwapPairs(
   re: Float64Array, im: Float64Array, pattern: IndexPattern, bitA: number, bitB: number,
   phaseRe: number, phaseIm: number,
+  from = 0, to = pattern.outer * pattern.run,
 ): void {
-  const { positions, value, outer, run } = pattern;
+  const { positions, value, run } = pattern;
   const exact = phaseRe === -1 && phaseIm === 0;
   const pr = (1 + phaseRe) / 2;
   const pi = phaseIm / 2;
   const qr = (1 - phaseRe) / 2;
   const qi = -phaseIm / 2;
   const shift = bitB - bitA;
-  for (let o = 0; o < outer; o++) {
-    const start = deposit(o * run, positions) | value;
-    const end = start + run;
+  for (let x = from; x < to;) {
+    const offset = x & (run - 1);
+    const length = Math.min(run - offset, to - x);
+    const start = (deposit(x - offset, positions) | value) + offset;
+    const end = start + length;
+    x += length;
     for (let i = start; i < end; i++) {
       const j = i + shift;
       const xr = re[i]!;

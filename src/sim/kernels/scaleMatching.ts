@@ -5,12 +5,15 @@
  */
 import { deposit, type IndexPattern } from '../internal/indexPattern.js';
 
-export function scaleMatching(re: Float64Array, im: Float64Array, pattern: IndexPattern, fr: number, fi: number): void {
-  const { positions, value, outer, run } = pattern;
+export function scaleMatching(re: Float64Array, im: Float64Array, pattern: IndexPattern, fr: number, fi: number, from = 0, to = pattern.outer * pattern.run): void {
+  const { positions, value, run } = pattern;
   const negate = fr === -1 && fi === 0;
-  for (let o = 0; o < outer; o++) {
-    const start = deposit(o * run, positions) | value;
-    const end = start + run;
+  for (let x = from; x < to;) {
+    const offset = x & (run - 1);
+    const length = Math.min(run - offset, to - x);
+    const start = (deposit(x - offset, positions) | value) + offset;
+    const end = start + length;
+    x += length;
     if (negate) {
       for (let i = start; i < end; i++) {
         re[i] = -re[i]!;
