@@ -49,7 +49,7 @@ export interface CheckItem {
 export interface CheckModelOptions {
   /** Pass/fail threshold on the error of exact constructions (default 1e-10). */
   readonly tolerance?: number;
-  /** Largest accepted error bound of approximate constructions (default 1e-3); a larger bound is inconclusive. */
+  /** Largest accepted error bound of approximate constructions (default 1e-6); a larger bound is inconclusive. */
   readonly precision?: number;
   /** More encodings to check after the standard ones (later stages add theirs). */
   readonly extra?: readonly (BlockEncoding | CheckItem)[];
@@ -195,7 +195,7 @@ function slaterRow(model: FermionModel, TA: ComplexMatrix, rotation: OneBodyRota
 export function checkModelBlocks(model: FermionModel, options: CheckModelOptions = {}): CheckRow[] {
   const thresholds: CheckLimits = {
     tolerance: options.tolerance ?? 1e-10,
-    precision: options.precision ?? 1e-3,
+    precision: options.precision ?? 1e-6,
     ...(options.maxSimulationWork === undefined ? {} : { maxSimulationWork: options.maxSimulationWork }),
   };
   const n = model.modes;

@@ -25,7 +25,7 @@ describe('polewright check MODEL', () => {
     const report = JSON.parse(result.stdout);
     expect(Object.keys(report)).toEqual(['tool', 'version', 'command', 'inputs', 'ok', 'z', 'tolerance', 'precision', 'E0', 'blocks']);
     expect(report).toMatchObject({ tool: 'polewright', command: 'check', inputs: { file: MODEL } });
-    expect(report).toMatchObject({ ok: true, z: { re: 0, im: 0.1 }, tolerance: 1e-10, precision: 1e-3 });
+    expect(report).toMatchObject({ ok: true, z: { re: 0, im: 0.1 }, tolerance: 1e-10, precision: 1e-6 });
     // Ladder operators, H, A, B, the orbital rotations, the Slater determinant, four inversion rows, four QSVT inverse rows.
     expect(report.blocks).toHaveLength(3 * 2 + 6 + 4 + 4);
     for (const block of report.blocks) {
@@ -34,7 +34,7 @@ describe('polewright check MODEL', () => {
       ]);
       expect(block).toMatchObject({ passed: true, verdict: 'pass' });
       expect(block.maxError).toBeLessThanOrEqual(Math.max(1e-10, block.errorBound));
-      expect(block.errorBound).toBeLessThanOrEqual(1e-3);
+      expect(block.errorBound).toBeLessThanOrEqual(1e-6);
     }
     // The fast inverse's α = 1/c never exceeds 1/η (default z = grid midpoint + iη, η = 0.1 in this model).
     for (const label of ['fast inverse (particle)', 'fast inverse (hole)']) {

@@ -23,8 +23,11 @@ interface CheckOptions {
   readonly z?: string;
 }
 
-/** Default target for the bounds of approximate rows: small enough that a zero, conjugated or mis-rotated fast inverse fails. */
-const DEFAULT_PRECISION = '1e-3';
+/**
+ * Default target for the bounds of approximate rows (fast inverses, QSVT inverses, which are built to it): small enough that
+ * a zero, conjugated or mis-rotated fast inverse fails, and the precision the readout uses by default.
+ */
+const DEFAULT_PRECISION = '1e-6';
 
 /** `--z re,im` or `--z a+bi` → { re, im } with im > 0. */
 const parseZ = (text: string): { re: number; im: number } => parseComplexOption('--z', text, true);
@@ -71,7 +74,7 @@ export function registerCheckCommand(program: Command): void {
     .argument('<model>', 'model file (JSON)')
     .option('--json', 'print { ok, z, tolerance, precision, E0, blocks: [...] } instead of a table')
     .option('--tolerance <tau>', 'largest accepted error of an exact construction', '1e-10')
-    .option('--precision <eps>', 'largest accepted error bound of an approximate construction (fast inverse)', DEFAULT_PRECISION)
+    .option('--precision <eps>', 'target and largest accepted error bound of the approximate constructions (fast and QSVT inverses)', DEFAULT_PRECISION)
     .option('--z <re,im>', 'frequency z = ω + iη of the fast-inverse and direct-shift rows (default: grid midpoint + iη)')
     .action((file: string, options: CheckOptions) => {
       const tolerance = parsePositiveNumber('--tolerance', options.tolerance);
