@@ -5,10 +5,10 @@ import { fileURLToPath } from 'node:url';
 import { loadModelFile } from '../src/model/loadModelFile.js';
 import { DEMO_MODEL_PATH, demoPointFiles } from '../src/cli/readout/demoScenario.js';
 import { solvedGround } from '../src/cli/readout/solvedGround.js';
-import { writeFolderAtomic } from '../src/cli/readout/writeFolderAtomic.js';
+import { topLevelNames, writeFolderAtomic } from '../src/core/writeFolderAtomic.js';
 
 const target = process.argv[2] ?? fileURLToPath(new URL('../circuits/demo-point', import.meta.url));
 const model = loadModelFile(DEMO_MODEL_PATH);
 const files = demoPointFiles(model, solvedGround(model));
-writeFolderAtomic(target, files);
+writeFolderAtomic(target, files, { onlyReplace: topLevelNames(files) });
 process.stdout.write(`wrote ${target}: ${[...files.keys()].join(', ')}\n`);

@@ -1,6 +1,6 @@
 /**
  * demoSpectrumSvg: the demo's plot — the exact spectral function as a line with gate-level points overlaid, one colour
- * and point shape per route — as SVG text, drawn with vega-lite compiled to vega and rendered server side (like
+ * point shape and size per route — as SVG text, drawn with vega-lite compiled to vega and rendered server side (like
  * lineChartSvg). Same input, same bytes.
  */
 import * as vega from 'vega';
@@ -17,6 +17,8 @@ export interface DemoSpectrum {
   readonly title: string;
   readonly xTitle: string;
   readonly yTitle: string;
+  /** Title of the legend: what tells the curve and the point series apart, e.g. "how the value was computed". */
+  readonly seriesTitle: string;
   /** The exact curve. */
   readonly line: SpectrumPoints;
   /** Point series drawn over it (at most three). */
@@ -26,6 +28,8 @@ export interface DemoSpectrum {
 /** Colour-blind-safe, clearly distinct: blue line, vermilion and bluish-green points, orange for a third series. */
 const COLOURS = ['#0072b2', '#d55e00', '#009e73', '#e69f00'];
 const SHAPES = ['circle', 'square', 'diamond'];
+/** Point sizes, largest first, so that series at the same place stay visible inside each other. */
+const SIZES = [220, 70, 30];
 
 export async function demoSpectrumSvg(chart: DemoSpectrum): Promise<string> {
   if (chart.points.length > SHAPES.length) throw new RangeError(`demoSpectrumSvg: at most ${SHAPES.length} point series`);
@@ -35,9 +39,9 @@ export async function demoSpectrumSvg(chart: DemoSpectrum): Promise<string> {
   const colour = {
     field: 'series',
     type: 'nominal' as const,
-    title: 'series',
+    title: chart.seriesTitle,
     scale: { domain: names, range: COLOURS.slice(0, names.length) },
-    legend: { labelLimit: 400 },
+    legend: { labelLimit: 400, titleLimit: 400 },
   };
   const spec: TopLevelSpec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
@@ -54,9 +58,10 @@ export async function demoSpectrumSvg(chart: DemoSpectrum): Promise<string> {
       { data: { values: rows(chart.line) }, mark: { type: 'line', strokeWidth: 1.5 } },
       {
         data: { values: chart.points.flatMap(rows) },
-        mark: { type: 'point', filled: false, size: 90, strokeWidth: 2, opacity: 1 },
+        mark: { type: 'point', filled: false, strokeWidth: 2, opacity: 1 },
         encoding: {
           shape: { field: 'series', type: 'nominal', scale: { domain: names.slice(1), range: SHAPES.slice(0, chart.points.length) }, legend: null },
+          size: { field: 'series', type: 'nominal', scale: { domain: names.slice(1), range: SIZES.slice(0, chart.points.length) }, legend: null },
         },
       },
     ],

@@ -32,6 +32,8 @@ describe('polewright build', () => {
     const manifest = JSON.parse(readFileSync(join(out, 'manifest.json'), 'utf8'));
     expect(manifest.pair).toEqual([0, 1]);
     expect(manifest.z).toEqual([-0.5, 0.5]);
+    expect(Object.keys(manifest).slice(0, 5)).toEqual(['tool', 'version', 'command', 'inputs', 'model']);
+    expect(manifest).toMatchObject({ command: 'build', inputs: { model: DEMO, pair: [0, 1], z: [-0.5, 0.5], route: 'direct', energy: null, out } });
     expect(typeof manifest.groundEnergy).toBe('number');
     expect(readFileSync(join(out, 'README.txt'), 'utf8')).toContain('2 P - 1');
     // The same circuits in memory, from the same stages.
@@ -90,13 +92,19 @@ describe('polewright build', () => {
     expect(manifest.files).toHaveLength(4);
   });
 
+  it('reports an --out path with a NUL byte as an InputError naming --out, before building (fuzz finding)', () => {
+    const options = { pair: '0,0', z: '0.2,0.5', route: 'direct', precision: '1e-6', out: `${dir}/\u0000` } as BuildCommandOptions;
+    expect(() => buildCommand(DEMO, options)).toThrow(InputError);
+    expect(() => buildCommand(DEMO, options)).toThrow(/^--out: ".*\\u0000" is not a valid path: it contains a NUL byte/);
+  });
+
   it('never replaces a folder holding other files', () => {
     const out = join(dir, 'occupied');
     mkdirSync(out);
     writeFileSync(join(out, 'notes.txt'), 'keep me');
     const result = runCli(['build', DEMO, '--pair', '0,0', '--z', '0.2,0.5', '--route', 'direct', '--out', out]);
     expect(result.status).toBe(2);
-    expect(result.stderr).toMatch(/already holds other files \(notes\.txt\)/);
+    expect(result.stderr).toMatch(/--out: ".*occupied" holds files this command does not write \(notes\.txt\)/);
     expect(readdirSync(out)).toEqual(['notes.txt']);
   });
 });

@@ -21,6 +21,8 @@ describe('polewright cost', () => {
       expect(json[route].toffoli).toBeGreaterThan(0);
     }
     expect(json.groundEnergySource).toBe('given');
+    expect(Object.keys(json).slice(0, 4)).toEqual(['tool', 'version', 'command', 'inputs']);
+    expect(json).toMatchObject({ tool: 'polewright', command: 'cost', inputs: { model, pair: [0, 0], precision: 0.05, energy: -1.5, toffoliT: 4, multiControl: 'measured', prepToffoli: null } });
   });
 
   it('says in the table that the ground-state preparation is not counted', () => {

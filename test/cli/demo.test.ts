@@ -10,7 +10,7 @@ import { runCli } from '../helpers/runCli.js';
 import { loadModelFile } from '../../src/model/loadModelFile.js';
 import { DEMO_MODEL_PATH, demoPointFiles } from '../../src/cli/readout/demoScenario.js';
 import { solvedGround } from '../../src/cli/readout/solvedGround.js';
-import { writeFolderAtomic } from '../../src/cli/readout/writeFolderAtomic.js';
+import { writeFolderAtomic } from '../../src/core/writeFolderAtomic.js';
 
 const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 const RECORDED = join(ROOT, 'circuits', 'demo-point');

@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { runCli } from '../helpers/runCli.js';
 import { denseGreen } from '../helpers/denseFock.js';
 import { loadModelFile } from '../../src/model/loadModelFile.js';
-import { estimateCommand, type EstimateCommandOptions } from '../../src/cli/commands/estimate.js';
+import { estimateCommand, MAX_ESTIMATE_WORK, type EstimateCommandOptions } from '../../src/cli/commands/estimate.js';
 import { isInputError } from '../../src/core/InputError.js';
 
 const DEMO = fileURLToPath(new URL('../../circuits/double-dot-nanowire.json', import.meta.url));
@@ -27,6 +27,8 @@ describe('polewright estimate', () => {
     expect(json.route).toBe('direct');
     expect(json.stdError).toBeNull();
     expect(Object.keys(json.parts)).toEqual(['particle', 'hole']);
+    expect(Object.keys(json).slice(0, 5)).toEqual(['tool', 'version', 'command', 'inputs', 'model']);
+    expect(json).toMatchObject({ command: 'estimate', inputs: { model: DEMO, pair: [0, 1], z: [0.3, 0.5], grid: null, route: 'direct', precision: 1e-6, loadState: false } });
     expect(json.qubits).toBeGreaterThan(4);
     expect(json.alpha).toBeGreaterThan(1);
     expect(json.errorBound).toBeLessThanOrEqual(1e-4);
@@ -73,6 +75,17 @@ describe('polewright estimate', () => {
     expect(result.status).toBe(2);
     expect(result.stderr).toMatch(/^polewright: --pair 0,4 is out of range/);
   });
+
+  it('refuses, before simulating, a readout beyond MAX_ESTIMATE_WORK (hubbard-ring4 with --load-state: ~1e11 updates; fuzz finding)', async () => {
+    const ring4 = fileURLToPath(new URL('../../circuits/hubbard-ring4.json', import.meta.url));
+    expect(MAX_ESTIMATE_WORK).toBe(2 ** 34);
+    const options = { pair: '0,0', z: '0.3,0.1', route: 'direct', seed: '1', precision: '1e-6', loadState: true } as EstimateCommandOptions;
+    await expect(estimateCommand(ring4, options)).rejects.toSatisfy(
+      (error: unknown) =>
+        isInputError(error) &&
+        /^estimate: simulating this readout takes about \d\.\de\+11 amplitude updates .* beyond the limit 1\.7e\+10 \(2\^34\); .*polewright build.*polewright cost/.test((error as Error).message),
+    );
+  }, 60000);
 
   it('refuses a model too large to simulate before allocating, naming the qubit count', () => {
     const ring = join(dir, 'ring6.json');

@@ -156,7 +156,7 @@ describe('polewright exact', () => {
     const mine = join(dir, 'mine');
     mkdirSync(mine);
     writeFileSync(join(mine, 'notes.txt'), 'keep me');
-    expect(await inputErrorOf(() => exactCommand(dimer, { out: mine }))).toMatch(/--out: ".*mine" holds files exact does not write \(notes\.txt\)/);
+    expect(await inputErrorOf(() => exactCommand(dimer, { out: mine }))).toMatch(/--out: ".*mine" holds files this command does not write \(notes\.txt\)/);
     expect(readFileSync(join(mine, 'notes.txt'), 'utf8')).toBe('keep me');
     expect(await inputErrorOf(() => exactCommand(dimer, { out: join(dimer, 'sub') }))).toMatch(/is not a folder/);
   });

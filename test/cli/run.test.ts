@@ -183,10 +183,19 @@ describe('polewright run exit codes', () => {
     });
     const [d, h, p, b] = results.map((r) => r.stderr);
     expect(d).toMatch(/deep\.qasm:259:\d+: gate 'g256' nests gate definitions 257 levels deep/);
-    expect(h).toMatch(/huge\.qasm: the program expands to 1\.10e\+12 gates; run simulates at most 2\^30/);
+    expect(h).toMatch(/huge\.qasm: the program expands to 1\.10e\+12 gates; run simulates at most 2\^24/);
     expect(p).toMatch(/power\.qasm:4:\d+: the exponent of pow must have magnitude at most 2\^53/);
     expect(b).toMatch(/2\^20 branches.*--shots/);
   }, 60000);
+
+  it('refuses a program of 2^25 gates (just over MAX_RUN_GATES = 2^24) before simulating', async () => {
+    const lines = ['OPENQASM 3;', 'include "stdgates.inc";', 'gate g0 a { x a; }'];
+    for (let k = 1; k <= 25; k++) lines.push(`gate g${k} a { g${k - 1} a; g${k - 1} a; }`);
+    const over = file('over.qasm', [...lines, 'qubit q;', 'g25 q;'].join('\n') + '\n');
+    const result = await exit(over);
+    expect(result.code).toBe(2);
+    expect(result.stderr).toMatch(/over\.qasm: the program expands to 3\.36e\+7 gates; run simulates at most 2\^24 \(16777216\) gates/);
+  });
 });
 
 describe('polewright run and OpenQASM 3.0.0 phases', () => {

@@ -49,6 +49,8 @@ describe('polewright verify CIRCUIT --encodes OPERATOR', () => {
     const report = JSON.parse(result.stdout);
     expect(report).toMatchObject({ ok: true, alphaFitted: true, mode: 'exhaustive', worstColumn: expect.any(Number), clean: {}, operator: fixture('lcu-two-paulis.json') });
     expect(report.version).toMatch(/^\d+\.\d+\.\d+/);
+    expect(Object.keys(report).slice(0, 5)).toEqual(['tool', 'version', 'command', 'inputs', 'ok']);
+    expect(report).toMatchObject({ command: 'verify', inputs: { circuit: fixture('lcu-two-paulis.qasm'), probes: 8, seed: 1, tolerance: 1e-8, alpha: null } });
     expect(Math.abs(report.alpha - 4)).toBeLessThan(1e-12);
     expect(report.maxError).toBeLessThan(1e-12);
   });

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { ensureDirectory } from '../../src/core/ensureDirectory.js';
 import { isInputError } from '../../src/core/InputError.js';
 import { writeFileAtomic } from '../../src/core/writeFileAtomic.js';
-import { writeFolderAtomic } from '../../src/core/writeFolderAtomic.js';
+import { checkFolderReplaceable, topLevelNames, writeFolderAtomic } from '../../src/core/writeFolderAtomic.js';
 
 const scratch = () => mkdtempSync(join(tmpdir(), 'polewright-atomic-'));
 
@@ -54,5 +54,25 @@ describe('atomic output', () => {
     expect(() => writeFolderAtomic(target, new Map([['../escape.txt', 'x']]))).toThrow(RangeError);
     expect(readFileSync(join(target, 'a.json'), 'utf8')).toBe('old');
     expect(readdirSync(root)).toEqual(['result']);
+  });
+
+  it('writeFolderAtomic with onlyReplace replaces an earlier run\'s folder but refuses one holding other entries, naming the label', () => {
+    const target = join(scratch(), 'out');
+    const files = new Map([['a.json', '1'], ['plots/b.svg', '<svg/>']]);
+    expect(topLevelNames(files)).toEqual(['a.json', 'plots']);
+    writeFolderAtomic(target, files, { onlyReplace: topLevelNames(files) });
+    expect(writeFolderAtomic(target, files, { label: '--out', onlyReplace: topLevelNames(files) }).replaced).toBe(true);
+    writeFileSync(join(target, 'notes.txt'), 'keep me');
+    expect(inputErrorOf(() => writeFolderAtomic(target, files, { label: '--out', onlyReplace: topLevelNames(files) })))
+      .toMatch(/^--out: ".*out" holds files this command does not write \(notes\.txt\)/);
+    expect(readFileSync(join(target, 'notes.txt'), 'utf8')).toBe('keep me');
+  });
+
+  it('writeFolderAtomic and checkFolderReplaceable report a path with a NUL byte as an input error naming the label (fuzz finding)', () => {
+    const root = scratch();
+    expect(inputErrorOf(() => writeFolderAtomic(`${root}/\u0000`, new Map([['a.txt', 'x']]), { label: '--out' })))
+      .toMatch(/^--out: ".*\\u0000" is not a valid path: it contains a NUL byte/);
+    expect(inputErrorOf(() => checkFolderReplaceable('a\u0000b', { label: '--out' }))).toMatch(/^--out: .*NUL byte/);
+    expect(readdirSync(root)).toEqual([]);
   });
 });

@@ -83,6 +83,16 @@ describe('parseModel(input, source) rejects bad input with an InputError naming 
       .toBe('model.json: lattice.shape: expected one of "chain", "ring", "grid", got "tube"');
   });
 
+  it('a number written beyond the double range (1e400 parses to Infinity) is named as such, with the field\'s limit (fuzz finding)', () => {
+    const hubbard = JSON.parse('{"lattice":{"shape":"chain","sites":2,"hopping":1e400},"interaction":4,"electrons":2}') as unknown;
+    expect(messageOf(hubbard)).toBe(
+      'model.json: lattice.hopping: expected a finite number, got a number beyond the double range (±1.8e308) (the field must lie within ±1000000)',
+    );
+    expect(messageOf({ modes: 2, electrons: 1, oneBody: [[0, 1, -Infinity]] })).toBe(
+      'model.json: oneBody[0][2]: expected a finite number, got a number beyond the double range (±1.8e308)',
+    );
+  });
+
   it('no recognisable form, mixed forms, or not an object', () => {
     expect(messageOf({ electrons: 1 })).toMatch(/^model\.json: \(top level\): cannot tell the model form/);
     expect(messageOf({ modes: 2, lattice: {}, electrons: 1 })).toMatch(/^model\.json: \(top level\): keys of several model forms/);

@@ -132,6 +132,12 @@ describe('outcomeDistribution(circuit)', () => {
     expect(error.message).toMatch(/8\.00 MiB memory limit/);
   });
 
+  it('words the refusal in the singular for one measurement and a cap of one branch ("1 measurement or reset", "1 branch")', () => {
+    const error = thrown(() => outcomeDistribution(measureAndResetAll(1), { maxBranches: 1 }));
+    expect(isTooManyBranchesError(error)).toBe(true);
+    expect(error.message).toMatch(/1 measurement or reset may give 2\^1 branches; the limit of 1 branch\b/);
+  });
+
   it('a circuit without classical bits has the single empty outcome', () => {
     const b = new CircuitBuilder();
     b.qubits('q', 1);

@@ -23,7 +23,9 @@ import { parseComplexZ, parsePair, parseRoute } from '../readout/parseReadoutOpt
 import { readoutFolderFiles } from '../readout/readoutFolderFiles.js';
 import { routeResolvent } from '../readout/routeResolvent.js';
 import { solvedGround } from '../readout/solvedGround.js';
-import { writeFolderAtomic } from '../readout/writeFolderAtomic.js';
+import { plural } from '../../core/plural.js';
+import { jsonHeader } from '../format/jsonHeader.js';
+import { checkFolderReplaceable, topLevelNames, writeFolderAtomic } from '../../core/writeFolderAtomic.js';
 
 export interface BuildCommandOptions {
   readonly pair: string;
@@ -65,6 +67,7 @@ export function buildCommand(file: string, options: BuildCommandOptions): void {
   const route = parseRoute(options.route);
   const precision = parsePositiveNumber('--precision', options.precision);
   const z = parseComplexZ(options.z);
+  checkFolderReplaceable(options.out, { label: '--out' });
   const energy = options.energy === undefined ? undefined : parseFiniteNumber('--energy', options.energy);
   const model = loadModelFile(file);
   const pair = parsePair(options.pair, model.modes);
@@ -81,8 +84,8 @@ export function buildCommand(file: string, options: BuildCommandOptions): void {
     precision,
     initialState: start.description,
     states: start.states.length,
-  });
-  writeFolderAtomic(options.out, files);
+  }, jsonHeader('build', { model: file, pair, z: [z.re, z.im], route, precision, energy: energy ?? null, out: options.out }));
+  writeFolderAtomic(options.out, files, { label: '--out', onlyReplace: topLevelNames(files) });
   const table = formatTable(
     ['file', 'part', 'component', 'scale', 'qubits', 'gates'],
     tests.map((t) => [`${t.name}.qasm`, t.part, t.component, t.scale.toPrecision(8), String(qubitCount(t.circuit)), String(totalGates(gateCounts(t.circuit)))]),
@@ -96,7 +99,7 @@ export function buildCommand(file: string, options: BuildCommandOptions): void {
       `initial state: ${start.description}`,
       table,
       `rule: G = Σ scale·(2·P(result = 0) − 1)·(1 for re, i for im)`,
-      `wrote: ${options.out}/ (${tests.length} OpenQASM files, manifest.json, README.txt)`,
+      `wrote: ${options.out}/ (${plural(tests.length, 'OpenQASM file')}, manifest.json, README.txt)`,
       '',
     ].join('\n'),
   );

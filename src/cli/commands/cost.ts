@@ -17,6 +17,7 @@ import { loadModelFile } from '../../model/loadModelFile.js';
 import { parseModel } from '../../model/parseModel.js';
 import { costChartSvg } from '../../report/costChartSvg.js';
 import { costCsv, type CostCsvRow } from '../../report/costCsv.js';
+import { jsonHeader } from '../format/jsonHeader.js';
 import { formatTable } from '../format/formatTable.js';
 import { parseFiniteNumber, parseNonNegativeInteger, parsePositiveNumber } from '../options.js';
 
@@ -219,7 +220,8 @@ export function registerCostCommand(program: Command): void {
       const comparison = compareRoutes(model, compare);
       if (options.json) {
         const json = Object.fromEntries(ROUTES.map((r) => [r, routeJson(comparison.routes[r])]));
-        process.stdout.write(`${JSON.stringify({ ...json, groundEnergy: comparison.groundEnergy, groundEnergySource: comparison.groundEnergySource, assumptions: comparison.assumptions }, null, 2)}\n`);
+        const inputs = { model: file, ...compare, z: [compare.z.re, compare.z.im], energy: compare.energy ?? null, prepToffoli: compare.prepToffoli ?? null };
+        process.stdout.write(`${JSON.stringify({ ...jsonHeader('cost', inputs), ...json, groundEnergy: comparison.groundEnergy, groundEnergySource: comparison.groundEnergySource, assumptions: comparison.assumptions }, null, 2)}\n`);
         return;
       }
       process.stdout.write(tableReport(model, comparison, compare));

@@ -13,6 +13,7 @@ import { estimateGreen, type GreenEstimate } from '../../readout/estimateGreen.j
 import { demoSpectrumSvg } from '../../report/demoSpectrumSvg.js';
 import { checkModelBlocks } from '../../verify/checkModelBlocks.js';
 import { inversionCheckItems } from '../../verify/inversionCheckItems.js';
+import { resolventCheckRows } from '../../verify/resolventCheckRows.js';
 import { formatCheckTable } from '../format/formatCheckTable.js';
 import { formatTable } from '../format/formatTable.js';
 import { DEMO_FREQUENCIES, DEMO_MODEL_PATH, DEMO_PAIR, DEMO_POINT, DEMO_PRECISION, demoPointFiles } from '../readout/demoScenario.js';
@@ -21,7 +22,10 @@ import { formatComplex } from '../readout/formatComplex.js';
 import type { Route } from '../readout/parseReadoutOptions.js';
 import { routeResolvent } from '../readout/routeResolvent.js';
 import { solvedGround } from '../readout/solvedGround.js';
-import { writeFolderAtomic } from '../readout/writeFolderAtomic.js';
+import { checkFolderReplaceable, topLevelNames, writeFolderAtomic } from '../../core/writeFolderAtomic.js';
+
+/** Target and largest accepted bound of the approximate rows of the demo's check (as `polewright check`'s default). */
+const CHECK_PRECISION = 1e-6;
 
 export interface DemoCommandOptions {
   readonly out: string;
@@ -75,6 +79,7 @@ function pointsCsv(points: readonly DemoPoint[]): string {
 /** Runs `polewright demo` in-process. */
 export async function demoCommand(options: DemoCommandOptions): Promise<void> {
   const started = performance.now();
+  checkFolderReplaceable(options.out, { label: '--out' });
   const model = loadModelFile(DEMO_MODEL_PATH);
   const [i, j] = DEMO_PAIR;
   progress(`${describeModel(model)}: exact spectral function on ${model.grid.points} frequencies`);
@@ -99,12 +104,12 @@ export async function demoCommand(options: DemoCommandOptions): Promise<void> {
   }
   progress('checking every block of the model against its exact operator');
   const checkZ = { re: DEMO_POINT.omega, im: model.broadening };
-  const checkRows = checkModelBlocks(model, {
-    tolerance: 1e-10,
-    precision: 1e-3,
-    extra: inversionCheckItems(model, { E0: ground.energy, z: checkZ, fastInverse: { precision: 1e-3 } }),
-  });
-  const checkText = formatCheckTable(describeModel(model), { z: checkZ, tolerance: 1e-10, precision: 1e-3, E0: ground.energy }, checkRows);
+  const thresholds = { tolerance: 1e-10, precision: CHECK_PRECISION };
+  const checkRows = [
+    ...checkModelBlocks(model, { ...thresholds, extra: inversionCheckItems(model, { E0: ground.energy, z: checkZ, fastInverse: { precision: CHECK_PRECISION } }) }),
+    ...resolventCheckRows(model, { E0: ground.energy, z: checkZ }, thresholds),
+  ];
+  const checkText = formatCheckTable(describeModel(model), { z: checkZ, ...thresholds, E0: ground.energy }, checkRows);
   progress(`writing the OpenQASM files of ω = ${DEMO_POINT.omega} (${DEMO_POINT.route} route)`);
   const circuits = demoPointFiles(model, ground);
   const spectral = spectralFunction(solution.green[0]!);
@@ -112,6 +117,7 @@ export async function demoCommand(options: DemoCommandOptions): Promise<void> {
     title: `${model.name}: spectral function A_${i}${j}(ω) = −Im G_${i}${j}(ω + iη)/π, η = ${model.broadening}`,
     xTitle: 'ω (model energy units)',
     yTitle: 'A(ω) (1/energy)',
+    seriesTitle: 'how the value was computed',
     line: { name: `exact (Lanczos) A_${i}${j}`, x: solution.frequencies, y: spectral },
     points: ROUTES.map((route) => {
       const mine = points.filter((p) => p.route === route);
@@ -134,7 +140,7 @@ export async function demoCommand(options: DemoCommandOptions): Promise<void> {
     ['check.txt', checkText],
   ]);
   for (const [name, content] of circuits) files.set(`circuits/${name}`, content);
-  writeFolderAtomic(options.out, files);
+  writeFolderAtomic(options.out, files, { label: '--out', onlyReplace: topLevelNames(files) });
   const seconds = (performance.now() - started) / 1000;
   const passed = checkRows.filter((r) => r.verdict === 'pass').length;
   process.stdout.write(

@@ -4,13 +4,19 @@
  * a standard error), next to the exact solver's value; at one z or along the real axis (--grid, η from the model).
  */
 import type { Command } from 'commander';
-import { InputError } from '../../core/InputError.js';
+import { ancillaIndices } from '../../blocks/BlockEncoding.js';
+import { InputError, isInputError } from '../../core/InputError.js';
 import { frequencyGrid } from '../../exact/frequencyGrid.js';
 import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 import { describeModel } from '../../model/describeModel.js';
 import { loadModelFile } from '../../model/loadModelFile.js';
 import { estimateGreen, type GreenEstimate } from '../../readout/estimateGreen.js';
+import type { GreenPart } from '../../readout/greenParts.js';
+import { greenParts } from '../../readout/greenParts.js';
+import { prepareBlockOnZeroAncillas } from '../../sim/simulateBlockOnZeroAncillas.js';
+import { MAX_SIMULATION_WORK } from '../../verify/checkModelBlocks.js';
 import { formatTable } from '../format/formatTable.js';
+import { jsonHeader } from '../format/jsonHeader.js';
 import { parseNonNegativeInteger, parsePositiveInteger, parsePositiveNumber } from '../options.js';
 import { exactGreenAt, type ExactValue } from '../readout/exactGreenAt.js';
 import { formatComplex } from '../readout/formatComplex.js';
@@ -31,6 +37,43 @@ export interface EstimateCommandOptions {
   readonly precision: string;
   readonly loadState?: boolean;
   readonly json?: boolean;
+}
+
+/**
+ * Most amplitude updates (runs × primitive operations per run × 2^simulated qubits) an estimate may simulate:
+ * 2^34 ≈ 1.7e10, a quarter of the per-row limit `check` uses (MAX_SIMULATION_WORK = 2^36), because estimate refuses
+ * where check only skips a row: hubbard-ring4 readouts of 18 simulated qubits ran at about 6e8 updates per second on
+ * one core, so 2^36 would allow two minutes without output and 2^34 keeps a run under about 30 s. A larger readout is
+ * refused before it starts; `build` writes its circuits and `cost` counts them without simulating.
+ */
+export const MAX_ESTIMATE_WORK = MAX_SIMULATION_WORK / 4;
+
+/**
+ * Refuses, before any simulation, a run whose work exceeds MAX_ESTIMATE_WORK: adds up the work of every frequency's
+ * parts (each compiled once here for its size; their encodings are kept by the resolvent factory for the run) and stops
+ * at the first frequency that crosses the limit. A part too large to compile is left to estimateGreen, which names it.
+ */
+function refuseOversizedSimulation(zs: readonly ComplexScalar[], partsAt: (z: ComplexScalar) => readonly GreenPart[], states: number): void {
+  let work = 0;
+  for (const [k, z] of zs.entries()) {
+    for (const part of partsAt(z)) {
+      try {
+        const run = prepareBlockOnZeroAncillas(part.encoding.block, { idleZero: ancillaIndices(part.encoding) });
+        work += states * run.operations * 2 ** run.stateQubits;
+      } catch (error) {
+        if (isInputError(error)) return;
+        throw error;
+      }
+    }
+    if (work > MAX_ESTIMATE_WORK) {
+      const counted = k + 1 < zs.length ? ` for the first ${k + 1} of ${zs.length} frequencies` : '';
+      throw new InputError(
+        `estimate: simulating this readout takes about ${work.toExponential(1)} amplitude updates${counted} ` +
+          `(runs × operations per run × 2^simulated qubits), beyond the limit ${MAX_ESTIMATE_WORK.toExponential(1)} (2^34); ` +
+          'write the circuits with `polewright build` or count their resources with `polewright cost` instead',
+      );
+    }
+  }
 }
 
 const pairOf = (c: ComplexScalar): [number, number] => [c.re, c.im];
@@ -70,6 +113,11 @@ export async function estimateCommand(file: string, options: EstimateCommandOpti
   const zs = single !== undefined ? [single] : Array.from(frequencyGrid(grid!), (omega) => ({ re: omega, im: model.broadening }));
   const ground = solvedGround(model, '; `polewright build --energy E0` writes the circuits without solving the model');
   const resolvent = routeResolvent(model, route, precision);
+  refuseOversizedSimulation(
+    zs,
+    (z) => greenParts({ modes: model.modes, electrons: model.electrons, groundEnergy: ground.energy, pair, z, resolvent: resolvent.factory }),
+    ground.states.length,
+  );
   const exact = exactGreenAt(model, ground.level, pair, zs);
   const progress = process.stderr.isTTY === true;
   const estimates = zs.map((z, k) =>
@@ -95,7 +143,12 @@ export async function estimateCommand(file: string, options: EstimateCommandOpti
   const mode = shots === undefined ? 'exact expectation' : `${shots} shots per Hadamard test, seed ${seed}`;
   const [i, j] = pair;
   if (options.json === true) {
+    const inputs = {
+      model: file, pair, z: single === undefined ? null : pairOf(single), grid: grid ?? null, route, shots: shots ?? null, seed, precision,
+      loadState: options.loadState === true,
+    };
     const common = {
+      ...jsonHeader('estimate', inputs),
       version: packageVersion(),
       model: model.name,
       pair,

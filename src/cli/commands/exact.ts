@@ -5,13 +5,13 @@
  * selfenergy.svg as one folder that replaces any earlier one whole. A ground level Lanczos cannot certify
  * is reported with exit code 1.
  */
-import { accessSync, constants, existsSync, readdirSync, statSync } from 'node:fs';
+import { accessSync, constants } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import cliProgress from 'cli-progress';
 import type { Command } from 'commander';
 import { ensureDirectory } from '../../core/ensureDirectory.js';
 import { InputError } from '../../core/InputError.js';
-import { writeFolderAtomic } from '../../core/writeFolderAtomic.js';
+import { checkFolderReplaceable, writeFolderAtomic } from '../../core/writeFolderAtomic.js';
 import { isConvergenceError } from '../../exact/ConvergenceError.js';
 import { DEFAULT_GREEN_TOLERANCE } from '../../exact/greensFunction.js';
 import { solveExact, type ExactSolution } from '../../exact/solveExact.js';
@@ -22,7 +22,7 @@ import { energyScale, gridProblem, MAX_BROADENING, MAX_GRID_POINTS, MIN_BROADENI
 import { greenCsv } from '../../report/greenTables.js';
 import { exactPlots } from '../../report/exactPlots.js';
 import { exactJson } from '../format/exactJson.js';
-import { plural } from '../format/plural.js';
+import { plural } from '../../core/plural.js';
 import { parseNumberInRange } from '../options.js';
 
 /** The files --out may write; a folder holding anything else is not replaced. */
@@ -116,22 +116,13 @@ function summary(model: FermionModel, s: ExactSolution, notes: readonly string[]
  * writable, and DIR is new or holds only files an earlier run wrote (it is replaced whole).
  */
 function prepareOutputFolder(dir: string): void {
-  const target = resolve(dir);
-  ensureDirectory(dirname(target));
+  checkFolderReplaceable(dir, { label: '--out', onlyReplace: OUTPUT_FILES });
+  const parent = dirname(resolve(dir));
   try {
-    accessSync(dirname(target), constants.W_OK);
+    ensureDirectory(parent);
+    accessSync(parent, constants.W_OK);
   } catch (error) {
     throw new InputError(`--out: cannot write to "${dir}": ${(error as Error).message}`);
-  }
-  if (!existsSync(target)) return;
-  if (!statSync(target).isDirectory()) throw new InputError(`--out: "${dir}" exists and is not a folder`);
-  const others = readdirSync(target).filter((name) => !(OUTPUT_FILES as readonly string[]).includes(name));
-  if (others.length > 0) {
-    const shown = others.slice(0, 3).join(', ') + (others.length > 3 ? ', …' : '');
-    throw new InputError(
-      `--out: "${dir}" holds files exact does not write (${shown}); --out replaces the whole folder, ` +
-        'so give a new folder or one an earlier exact run wrote',
-    );
   }
 }
 
@@ -145,7 +136,7 @@ async function writeOutputs(dir: string, json: string, model: FermionModel, s: E
   if (plots.spectral !== null) files.set('spectral.svg', plots.spectral);
   if (plots.selfEnergy !== null) files.set('selfenergy.svg', plots.selfEnergy);
   notes.push(...plots.notes);
-  const { replaced } = writeFolderAtomic(dir, files);
+  const { replaced } = writeFolderAtomic(dir, files, { label: '--out', onlyReplace: OUTPUT_FILES });
   if (replaced) process.stderr.write(`polewright: replaced the earlier contents of "${dir}" with this run's ${plural(files.size, 'file')}\n`);
   notes.push(`wrote: ${[...files.keys()].map((name) => `${dir}/${name}`).join(', ')}`);
 }

@@ -11,6 +11,7 @@ import { registerRoles } from '../../verify/registerRoles.js';
 import { unitaryQasmCircuit } from '../../verify/unitaryQasmCircuit.js';
 import { verifyCircuit, type CircuitVerification } from '../../verify/verifyCircuit.js';
 import { parsePositiveInteger, parsePositiveNumber } from '../options.js';
+import { jsonHeader } from '../format/jsonHeader.js';
 import { packageVersion } from '../readout/packageVersion.js';
 
 interface VerifyOptions {
@@ -117,8 +118,11 @@ export function registerVerifyCommand(program: Command): void {
       const result = { ...verification, notes: [...notes, ...verification.notes] };
       if (options.json) {
         const inputs = { circuit: circuitFile, operator: options.encodes, ...(part === undefined ? {} : { part }), probes };
+        const header = jsonHeader('verify', {
+          ...inputs, alpha: alpha ?? null, system: options.system ?? null, signal: signal ?? null, clean: clean ?? null, seed, tolerance,
+        });
         const { ok, ...figures } = result;
-        process.stdout.write(`${JSON.stringify({ ok, version: packageVersion(), ...inputs, ...figures }, null, 2)}\n`);
+        process.stdout.write(`${JSON.stringify({ ...header, ok, version: packageVersion(), ...inputs, ...figures }, null, 2)}\n`);
       } else process.stdout.write(formatText(circuitFile, options.encodes, result));
       if (!result.ok) process.exitCode = 1;
     });

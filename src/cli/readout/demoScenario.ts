@@ -8,6 +8,7 @@ import { fileURLToPath } from 'node:url';
 import type { FermionModel } from '../../model/FermionModel.js';
 import { greenParts } from '../../readout/greenParts.js';
 import { hadamardTests } from '../../readout/hadamardTests.js';
+import { jsonHeader } from '../format/jsonHeader.js';
 import { readoutFolderFiles } from './readoutFolderFiles.js';
 import { routeResolvent } from './routeResolvent.js';
 import type { SolvedGround } from './solvedGround.js';
@@ -40,5 +41,5 @@ export function demoPointFiles(model: FermionModel, ground: SolvedGround): Map<s
     precision: DEMO_PRECISION,
     initialState: ground.description,
     states: ground.states.length,
-  });
+  }, jsonHeader('demo', { pair: DEMO_PAIR, z: [z.re, z.im], route: DEMO_POINT.route, precision: DEMO_PRECISION }));
 }

@@ -8,6 +8,7 @@ import { qubitCount } from '../../circuit/CircuitBuilder.js';
 import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 import { writeQasm } from '../../qasm/writeQasm.js';
 import type { HadamardTest } from '../../readout/hadamardTests.js';
+import type { JsonHeader } from '../format/jsonHeader.js';
 
 export interface ReadoutFolderInfo {
   readonly model: string;
@@ -42,10 +43,16 @@ function readme(info: ReadoutFolderInfo, tests: readonly HadamardTest[]): string
   return lines.join('\n');
 }
 
-export function readoutFolderFiles(tests: readonly HadamardTest[], info: ReadoutFolderInfo): Map<string, string> {
+/** `header` (jsonHeader of the command that writes the folder) opens manifest.json. */
+export function readoutFolderFiles(
+  tests: readonly HadamardTest[],
+  info: ReadoutFolderInfo,
+  header: JsonHeader<Record<string, unknown>>,
+): Map<string, string> {
   const files = new Map<string, string>();
   for (const test of tests) files.set(`${test.name}.qasm`, writeQasm(test.circuit));
   const manifest = {
+    ...header,
     model: info.model,
     pair: info.pair,
     z: [info.z.re, info.z.im],

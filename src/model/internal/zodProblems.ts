@@ -1,5 +1,6 @@
 // zodProblems: turns zod issues into Problems with plain-language messages (missing, wrong type, unknown key, range).
 import type { z } from 'zod';
+import { MAX_BROADENING, MAX_ENERGY, MAX_GRID_POINTS, MAX_MODES, MIN_BROADENING } from '../modelLimits.js';
 import type { Problem } from './Problem.js';
 
 export function zodProblems(error: z.ZodError): Problem[] {
@@ -18,8 +19,20 @@ export function zodProblems(error: z.ZodError): Problem[] {
 /** Longest shown form of an offending value; a huge array is cut, not printed whole. */
 const LONGEST_SHOWN = 80;
 
+/** The range modelLimits.ts gives a field, by its key, for messages about values that are not numbers at all. */
+const FIELD_LIMITS: ReadonlyMap<string, string> = new Map([
+  ...['hopping', 'interaction', 'chemicalPotential', 'level', 'coupling'].map((key): [string, string] => [key, `±${MAX_ENERGY}`]),
+  ['broadening', `${MIN_BROADENING} … ${MAX_BROADENING}`],
+  ['points', `1 … ${MAX_GRID_POINTS}`],
+  ['modes', `1 … ${MAX_MODES}`],
+  ['electrons', `0 … ${MAX_MODES}`],
+]);
+
 /** The value as JSON for a message, cut to LONGEST_SHOWN characters; a value too deeply nested to stringify is named so. */
 function shown(value: unknown): string {
+  if (typeof value === 'number' && !Number.isFinite(value)) {
+    return Number.isNaN(value) ? 'a number that is not a number (NaN)' : 'a number beyond the double range (±1.8e308)';
+  }
   let text: string;
   try {
     text = JSON.stringify(value);
@@ -30,12 +43,20 @@ function shown(value: unknown): string {
   return text.length > LONGEST_SHOWN ? `${text.slice(0, LONGEST_SHOWN - 1)}…` : text;
 }
 
+/** ", which must lie within …" for a field whose range modelLimits.ts gives, else "". */
+function limitOf(path: readonly (string | number)[]): string {
+  const key = [...path].reverse().find((k): k is string => typeof k === 'string');
+  const limit = key === undefined ? undefined : FIELD_LIMITS.get(key);
+  return limit === undefined ? '' : ` (the field must lie within ${limit})`;
+}
+
 function describeIssue(issue: z.core.$ZodIssue): string {
   const hasInput = 'input' in issue && issue.input !== undefined;
   const got = hasInput ? `, got ${shown(issue.input)}` : '';
   switch (issue.code) {
     case 'invalid_type':
       if (!hasInput) return 'required field is missing';
+      if (typeof issue.input === 'number' && !Number.isFinite(issue.input)) return `expected a finite number${got}${limitOf(issue.path.filter((k) => typeof k !== 'symbol'))}`;
       return `expected ${issue.expected === 'int' ? 'an integer' : issue.expected}${got}`;
     case 'too_small':
       if (issue.origin === 'array') return `expected at least ${issue.minimum} items`;

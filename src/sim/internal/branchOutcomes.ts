@@ -8,6 +8,7 @@
  */
 import type { Circuit } from '../../circuit/types.js';
 import { ensureFits, formatBytes, plannedMemoryLimit } from '../../core/memoryBudget.js';
+import { plural } from '../../core/plural.js';
 import { StateVector, stateVectorBytes } from '../StateVector.js';
 import type { SimulationOptions } from '../SimulationOptions.js';
 import { NEGLIGIBLE_PROBABILITY } from '../outcomeTypes.js';
@@ -67,22 +68,22 @@ function branchCap(qubits: number, maxBranches: number, options: SimulationOptio
   const byWork = Math.floor(MAX_BRANCH_AMPLITUDES / 2 ** qubits);
   const byMemory = Math.floor(planned / bytes);
   if (byMemory < Math.min(maxBranches, byWork)) {
-    return { cap: Math.max(1, byMemory), reason: `${byMemory} states of ${qubits} qubits (${formatBytes(bytes)} each) fill the ${formatBytes(planned)} memory limit` };
+    return { cap: Math.max(1, byMemory), reason: `${plural(byMemory, 'state')} of ${plural(qubits, 'qubit')} (${formatBytes(bytes)} each) fill the ${formatBytes(planned)} memory limit` };
   }
-  if (byWork < maxBranches) return { cap: Math.max(1, byWork), reason: `branch states may hold 2^26 amplitudes in all: ${byWork} states of ${qubits} qubits` };
-  return { cap: maxBranches, reason: `the limit of ${maxBranches} branches` };
+  if (byWork < maxBranches) return { cap: Math.max(1, byWork), reason: `branch states may hold 2^26 amplitudes in all: ${plural(byWork, 'state')} of ${plural(qubits, 'qubit')}` };
+  return { cap: maxBranches, reason: `the limit of ${plural(maxBranches, 'branch', 'branches')}` };
 }
 
 /** `splits`: the measurement plan's count of measurements and resets that may split the state. */
 export function branchOutcomes(circuit: Circuit, qubits: number, bits: number, splits: number, maxBranches: number, options: SimulationOptions): Map<string, number> {
   const { cap, reason } = branchCap(qubits, maxBranches, options);
-  if (2 ** splits > cap) throw new TooManyBranchesError(cap, `${splits} measurements and resets may give 2^${splits} branches; ${reason}`);
+  if (2 ** splits > cap) throw new TooManyBranchesError(cap, `${plural(splits, 'measurement or reset', 'measurements and resets')} may give 2^${splits} branches; ${reason}`);
   let branches: Branch[] = [{ state: StateVector.zero(qubits, options), bits: new Uint8Array(bits), weight: 1 }];
   for (const op of flattenForSimulation(circuit, options)) {
     if (op.kind === 'measure' || op.kind === 'reset') {
       const weights = branches.map((branch) => outcomeWeights(branch, op.qubit));
       const count = weights.reduce((sum, [zero, one]) => sum + (zero > 0 ? 1 : 0) + (one > 0 ? 1 : 0), 0);
-      if (count > branches.length) ensureFits((count - branches.length) * stateVectorBytes(qubits), `${count - branches.length} new measurement branches of ${qubits} qubits`, options.memoryLimitBytes);
+      if (count > branches.length) ensureFits((count - branches.length) * stateVectorBytes(qubits), `${plural(count - branches.length, 'new measurement branch', 'new measurement branches')} of ${plural(qubits, 'qubit')}`, options.memoryLimitBytes);
       const bit = op.kind === 'measure' ? op.bit : -1;
       branches = branches.flatMap((branch, k) => split(branch, weights[k] as [number, number], op.qubit, bit, op.kind === 'reset', options));
     } else {
