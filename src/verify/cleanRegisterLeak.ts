@@ -4,6 +4,7 @@
  * the clean-|0> subspace (0 up to rounding for a correct compute/uncompute pair).
  */
 import { call } from '../circuit/ops.js';
+import { randomUnitVector } from '../core/randomUnitVector.js';
 import { seededRandom } from '../core/seededRandom.js';
 import { ancillaIndicesWithRole, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import { StateVector } from '../sim/StateVector.js';
@@ -26,21 +27,7 @@ export function cleanRegisterLeak(encoding: BlockEncoding, options: CleanLeakOpt
   let leak = 0;
   for (let p = 0; p < (options.probes ?? 4); p++) {
     const state = StateVector.zero(width, options);
-    let norm = 0;
-    for (let k = 0; k < state.re.length; k++) {
-      if ((k & cleanMask) !== 0) continue;
-      // Box–Muller Gaussian amplitudes give a uniformly random direction.
-      const r = Math.sqrt(-2 * Math.log(1 - random.next()));
-      const t = 2 * Math.PI * random.next();
-      state.re[k] = r * Math.cos(t);
-      state.im[k] = r * Math.sin(t);
-      norm += r * r;
-    }
-    const scale = 1 / Math.sqrt(norm);
-    for (let k = 0; k < state.re.length; k++) {
-      state.re[k] = state.re[k]! * scale;
-      state.im[k] = state.im[k]! * scale;
-    }
+    randomUnitVector(state.re.length, random, cleanMask, state);
     applyUnitaryOps(state, [call(encoding.block, Array.from({ length: width }, (_, k) => k))], options);
     let outside = 0;
     for (let k = 0; k < state.re.length; k++) if ((k & cleanMask) !== 0) outside += state.re[k]! ** 2 + state.im[k]! ** 2;

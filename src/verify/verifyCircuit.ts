@@ -8,6 +8,7 @@
  */
 import type { Circuit, Register } from '../circuit/types.js';
 import { InputError } from '../core/InputError.js';
+import { randomUnitVector } from '../core/randomUnitVector.js';
 import { seededRandom, type RandomSource } from '../core/seededRandom.js';
 import { targetAction, type ComplexVector, type TargetAction } from '../operatorFile/targetAction.js';
 import { targetSizeProblem, type TargetOperator } from '../operatorFile/TargetOperator.js';
@@ -80,26 +81,6 @@ function checkOptions(options: VerifyCircuitOptions): void {
   if (options.seed !== undefined && !Number.isInteger(options.seed)) throw new RangeError(`verifyCircuit: seed must be an integer, got ${options.seed}`);
 }
 
-/** A uniformly random unit vector (Box–Muller Gaussian amplitudes, normalised). */
-function randomUnit(dim: number, random: RandomSource): ComplexVector {
-  const re = new Float64Array(dim);
-  const im = new Float64Array(dim);
-  let norm = 0;
-  for (let k = 0; k < dim; k++) {
-    const r = Math.sqrt(-2 * Math.log(1 - random.next()));
-    const t = 2 * Math.PI * random.next();
-    re[k] = r * Math.cos(t);
-    im[k] = r * Math.sin(t);
-    norm += r * r;
-  }
-  const scale = 1 / Math.sqrt(norm);
-  for (let k = 0; k < dim; k++) {
-    re[k] = re[k]! * scale;
-    im[k] = im[k]! * scale;
-  }
-  return { re, im };
-}
-
 /** One input of the check: a system basis column, or a random system state. */
 type Input = { readonly column: number } | { readonly state: ComplexVector };
 
@@ -159,28 +140,10 @@ class BlockRunner {
 
   /** Runs U on a random state of the system and signal qubits with every clean qubit |0>; returns the leaks. */
   leaksOnRandomInput(random: RandomSource): number[] {
-    const { re, im } = this.state;
+    const { re } = this.state;
     let cleanMask = 0;
     for (const register of this.roles.clean) cleanMask |= (2 ** register.size - 1) * 2 ** register.offset;
-    let norm = 0;
-    for (let k = 0; k < re.length; k++) {
-      if ((k & cleanMask) !== 0) {
-        re[k] = 0;
-        im[k] = 0;
-        continue;
-      }
-      // Box–Muller Gaussian amplitudes give a uniformly random direction.
-      const r = Math.sqrt(-2 * Math.log(1 - random.next()));
-      const t = 2 * Math.PI * random.next();
-      re[k] = r * Math.cos(t);
-      im[k] = r * Math.sin(t);
-      norm += r * r;
-    }
-    const scale = 1 / Math.sqrt(norm);
-    for (let k = 0; k < re.length; k++) {
-      re[k] = re[k]! * scale;
-      im[k] = im[k]! * scale;
-    }
+    randomUnitVector(re.length, random, cleanMask, this.state);
     applyCircuit(this.state, this.circuit, this.options);
     return this.leaks();
   }
@@ -231,7 +194,7 @@ export function verifyCircuit(circuit: Circuit, target: TargetOperator, options:
     if (mode === 'exhaustive') for (let column = 0; column < dim; column++) yield { column };
     else {
       const random = seededRandom(seed);
-      for (let p = 0; p < probes; p++) yield { state: randomUnit(dim, random) };
+      for (let p = 0; p < probes; p++) yield { state: randomUnitVector(dim, random) };
     }
   };
 

@@ -4,7 +4,8 @@
  * basis columns; above the limit, random system states are probed — the ancilla-|0> part of U|ψ,0> against M|ψ>/α, a lower
  * bound on the error — and a power iteration on E†E, E = <0|U|0> − M/α, estimates the operator-norm error.
  */
-import { seededRandom, type RandomSource } from '../core/seededRandom.js';
+import { randomUnitVector } from '../core/randomUnitVector.js';
+import { seededRandom } from '../core/seededRandom.js';
 import { ancillaQubits, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { StateVector } from '../sim/StateVector.js';
@@ -134,26 +135,6 @@ function checkColumns(encoding: BlockEncoding, reference: ReferenceOperator, col
   return { maxError, unitarityDeviation };
 }
 
-/** A uniformly random unit vector of dim amplitudes (Box–Muller Gaussian amplitudes, normalised). */
-function randomUnit(dim: number, random: RandomSource): { re: Float64Array; im: Float64Array } {
-  const re = new Float64Array(dim);
-  const im = new Float64Array(dim);
-  let norm = 0;
-  for (let k = 0; k < dim; k++) {
-    const r = Math.sqrt(-2 * Math.log(1 - random.next()));
-    const t = 2 * Math.PI * random.next();
-    re[k] = r * Math.cos(t);
-    im[k] = r * Math.sin(t);
-    norm += r * r;
-  }
-  const inv = 1 / Math.sqrt(norm);
-  for (let k = 0; k < dim; k++) {
-    re[k] = re[k]! * inv;
-    im[k] = im[k]! * inv;
-  }
-  return { re, im };
-}
-
 /** E x (or E† x) with E = <0|U|0> − M/α: simulate U (U†) on |x, 0_anc>, keep the ancilla-|0> part, subtract (M or M†) x/α. */
 function errorApplied(encoding: BlockEncoding, reference: ReferenceOperator, x: { re: Float64Array; im: Float64Array }, adjoint: boolean, runner: BlockOnZeroAncillas) {
   const dim = x.re.length;
@@ -179,13 +160,13 @@ function probe(encoding: BlockEncoding, reference: ReferenceOperator, options: V
   const forward = onZeroAncillas(encoding, options);
   const backward = onZeroAncillas(encoding, options, true);
   for (let p = 0; p < probes; p++) {
-    const x = randomUnit(dim, random);
+    const x = randomUnitVector(dim, random);
     const error = errorApplied(encoding, reference, x, false, forward);
     for (let i = 0; i < dim; i++) maxError = Math.max(maxError, Math.hypot(error.re[i]!, error.im[i]!));
     unitarityDeviation = Math.max(unitarityDeviation, Math.abs(error.state.norm() - 1));
   }
   // Power iteration on E†E (Golub & Van Loan, Matrix Computations, 4th ed., §8.2.1): ‖E x‖ for unit x rises towards ‖E‖.
-  let x = randomUnit(dim, random);
+  let x = randomUnitVector(dim, random);
   let estimate = 0;
   let iterations = 0;
   for (let step = 0; step < (options.powerIterations ?? 8); step++) {

@@ -2,22 +2,12 @@ import { existsSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } fro
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { inputErrorMessage } from '../helpers/inputErrorMessage.js';
 import { ensureDirectory } from '../../src/core/ensureDirectory.js';
-import { isInputError } from '../../src/core/InputError.js';
 import { writeFileAtomic } from '../../src/core/writeFileAtomic.js';
 import { checkFolderReplaceable, topLevelNames, writeFolderAtomic } from '../../src/core/writeFolderAtomic.js';
 
 const scratch = () => mkdtempSync(join(tmpdir(), 'polewright-atomic-'));
-
-function inputErrorOf(run: () => void): string {
-  try {
-    run();
-  } catch (error) {
-    expect(isInputError(error)).toBe(true);
-    return (error as Error).message;
-  }
-  throw new Error('expected an input error');
-}
 
 describe('atomic output', () => {
   it('ensureDirectory creates missing parents and refuses a path through a file, naming it', () => {
@@ -25,7 +15,7 @@ describe('atomic output', () => {
     ensureDirectory(join(root, 'a/b/c'));
     expect(existsSync(join(root, 'a/b/c'))).toBe(true);
     writeFileSync(join(root, 'file'), 'x');
-    expect(inputErrorOf(() => ensureDirectory(join(root, 'file/sub')))).toContain('is not a folder');
+    expect(inputErrorMessage(() => ensureDirectory(join(root, 'file/sub')))).toContain('is not a folder');
   });
 
   it('writeFileAtomic leaves no temporary file behind and reports an unwritable path as an input error', () => {
@@ -34,7 +24,7 @@ describe('atomic output', () => {
     expect(readFileSync(join(root, 'x/out.txt'), 'utf8')).toBe('hello');
     expect(readdirSync(join(root, 'x'))).toEqual(['out.txt']);
     writeFileSync(join(root, 'blocker'), '');
-    expect(inputErrorOf(() => writeFileAtomic(join(root, 'blocker/out.txt'), 'x'))).toContain('blocker');
+    expect(inputErrorMessage(() => writeFileAtomic(join(root, 'blocker/out.txt'), 'x'))).toContain('blocker');
   });
 
   it('writeFolderAtomic replaces the whole folder, so no stale file of an earlier run survives', () => {
@@ -63,16 +53,16 @@ describe('atomic output', () => {
     writeFolderAtomic(target, files, { onlyReplace: topLevelNames(files) });
     expect(writeFolderAtomic(target, files, { label: '--out', onlyReplace: topLevelNames(files) }).replaced).toBe(true);
     writeFileSync(join(target, 'notes.txt'), 'keep me');
-    expect(inputErrorOf(() => writeFolderAtomic(target, files, { label: '--out', onlyReplace: topLevelNames(files) })))
+    expect(inputErrorMessage(() => writeFolderAtomic(target, files, { label: '--out', onlyReplace: topLevelNames(files) })))
       .toMatch(/^--out: ".*out" holds files this command does not write \(notes\.txt\)/);
     expect(readFileSync(join(target, 'notes.txt'), 'utf8')).toBe('keep me');
   });
 
   it('writeFolderAtomic and checkFolderReplaceable report a path with a NUL byte as an input error naming the label (fuzz finding)', () => {
     const root = scratch();
-    expect(inputErrorOf(() => writeFolderAtomic(`${root}/\u0000`, new Map([['a.txt', 'x']]), { label: '--out' })))
+    expect(inputErrorMessage(() => writeFolderAtomic(`${root}/\u0000`, new Map([['a.txt', 'x']]), { label: '--out' })))
       .toMatch(/^--out: ".*\\u0000" is not a valid path: it contains a NUL byte/);
-    expect(inputErrorOf(() => checkFolderReplaceable('a\u0000b', { label: '--out' }))).toMatch(/^--out: .*NUL byte/);
+    expect(inputErrorMessage(() => checkFolderReplaceable('a\u0000b', { label: '--out' }))).toMatch(/^--out: .*NUL byte/);
     expect(readdirSync(root)).toEqual([]);
   });
 });

@@ -4,20 +4,10 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { isInputError } from '../../src/core/InputError.js';
+import { inputErrorMessage } from '../helpers/inputErrorMessage.js';
 import { readTextFileLimited } from '../../src/core/readTextFileLimited.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'polewright-read-'));
-
-function messageOf(run: () => unknown): string {
-  try {
-    run();
-  } catch (error) {
-    expect(isInputError(error)).toBe(true);
-    return (error as Error).message;
-  }
-  throw new Error('expected an input error');
-}
 
 describe('readTextFileLimited(path, maxBytes, what)', () => {
   it('returns the whole text of a file at the limit, UTF-8 decoded', () => {
@@ -29,15 +19,15 @@ describe('readTextFileLimited(path, maxBytes, what)', () => {
   it('refuses a regular file one byte over the limit, naming the file, the kind and the limit', () => {
     const path = join(dir, 'over.txt');
     writeFileSync(path, 'x'.repeat(1025));
-    expect(messageOf(() => readTextFileLimited(path, 1024, 'test file'))).toBe(`${path}: the test file is larger than 1.00 KiB, the most it may be`);
+    expect(inputErrorMessage(() => readTextFileLimited(path, 1024, 'test file'))).toBe(`${path}: the test file is larger than 1.00 KiB, the most it may be`);
   });
 
   it('stops reading an endless device (/dev/zero) once the limit is passed', () => {
-    expect(messageOf(() => readTextFileLimited('/dev/zero', 2 ** 20, 'OpenQASM program'))).toMatch(/^\/dev\/zero: the OpenQASM program is larger than 1\.00 MiB/);
+    expect(inputErrorMessage(() => readTextFileLimited('/dev/zero', 2 ** 20, 'OpenQASM program'))).toMatch(/^\/dev\/zero: the OpenQASM program is larger than 1\.00 MiB/);
   });
 
   it('reports a missing file and a folder as input errors naming them', () => {
-    expect(messageOf(() => readTextFileLimited(join(dir, 'absent.txt'), 10, 'test file'))).toMatch(/absent\.txt: cannot read the test file: no such file/);
-    expect(messageOf(() => readTextFileLimited(dir, 10, 'test file'))).toMatch(/cannot read the test file: it is a directory/);
+    expect(inputErrorMessage(() => readTextFileLimited(join(dir, 'absent.txt'), 10, 'test file'))).toMatch(/absent\.txt: cannot read the test file: no such file/);
+    expect(inputErrorMessage(() => readTextFileLimited(dir, 10, 'test file'))).toMatch(/cannot read the test file: it is a directory/);
   });
 });
