@@ -9,6 +9,7 @@
  */
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
+import { MIN_PRECISION } from '../resolvent/planResolvent.js';
 import { resolventCost, type ResolventCost } from '../resolvent/resolventCost.js';
 import type { ResolventRoute } from '../resolvent/ResolventReport.js';
 import { UnreachablePrecisionError } from '../resolvent/UnreachablePrecisionError.js';
@@ -35,10 +36,14 @@ function plan(model: FermionModel, w: ComplexScalar, route: RouteName, options: 
   // the exact multiplexor the simulation prefers for small registers costs 2^m rotations, i.e. grows like ‖A‖/Δ.
   const at = (precision: number): ResolventCost =>
     resolventCost(model, w, { route, precision, reachablePrecision: true, fastInverse: { flagRotation: 'pruned' }, ...window });
-  let epsilon = Math.min(MAX_BLOCK_PRECISION, options.precision);
+  // The resolvent plans ε ≥ MIN_PRECISION only; a tighter target is reported as not met rather than planned for.
+  const clamp = (eps: number): number => Math.max(MIN_PRECISION, Math.min(MAX_BLOCK_PRECISION, eps));
+  let epsilon = clamp(options.precision);
   let cost = at(epsilon);
   for (let k = 1; k < MAX_PLANS && cost.report.errorBoundOperator > options.precision && cost.report.precision === epsilon; k++) {
-    epsilon = Math.min(MAX_BLOCK_PRECISION, (REPLAN_MARGIN * epsilon * options.precision) / cost.report.errorBoundOperator);
+    const next = clamp((REPLAN_MARGIN * epsilon * options.precision) / cost.report.errorBoundOperator);
+    if (next === epsilon) break;
+    epsilon = next;
     cost = at(epsilon);
   }
   return cost;

@@ -43,6 +43,13 @@ describe('polewright cost', () => {
     expect(readFileSync(join(out, 'cost.svg'), 'utf8')).toMatch(/^<svg/);
   });
 
+  it('reports a precision below what can be planned (1e-300) as not met, with the figures of the finest plan, exit 0', () => {
+    const result = runCli(['cost', model, '--precision', '1e-300']);
+    expect(result.stderr).not.toMatch(/internal error/);
+    expect(result.status).toBe(0);
+    expect(result.stdout).toMatch(/PRECISION NOT MET/);
+  });
+
   it('rejects an unknown --vary key, an empty value list and ε ≤ 0 with exit 2', () => {
     const unknown = runCli(['cost', model, '--vary', 'gauge=1,2', '--out', dir]);
     expect(unknown.status).toBe(2);
