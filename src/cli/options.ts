@@ -91,3 +91,9 @@ export function parseComplexOption(option: string, text: string, upperHalfPlane 
   }
   return { re, im };
 }
+
+/**
+ * Most shots any sampling option accepts (`run --shots`, `estimate --shots`): 10^9, under a minute when an exact
+ * distribution is sampled; shot-by-shot trajectories take longer and show progress.
+ */
+export const MAX_SHOTS = 1_000_000_000;

@@ -16,6 +16,7 @@ import { relativeInverseError } from '../qsvt/qsvtInverse.js';
 import { qsvtInverseStructure } from '../qsvt/qsvtInverseStructure.js';
 import { planResolvent, type ResolventOptions } from './planResolvent.js';
 import type { ResolventReport } from './ResolventReport.js';
+import { UnreachablePrecisionError } from './UnreachablePrecisionError.js';
 
 export interface ResolventCost {
   readonly report: ResolventReport;
@@ -29,6 +30,9 @@ export function resolventCost(model: FermionModel, w: ComplexScalar, options: Re
   const { M, F } = plan;
   const K = plan.conditionBound;
   const degree = inverseDegreeBound(plan.delta, relativeInverseError(plan.delta, plan.polynomialError));
+  if (!Number.isSafeInteger(degree)) {
+    throw new UnreachablePrecisionError(`resolventCost: δ = ${plan.delta.toExponential(3)} is too small: the polynomial's degree bound (${degree}) is not a representable count`, null);
+  }
   const alphaInverse = 1 / ((options.supTarget ?? 0.5) * plan.delta * M.alpha);
   const inputPropagation = M.errorBound * M.alpha * K;
   const inverseError = plan.polynomialError + inputPropagation;

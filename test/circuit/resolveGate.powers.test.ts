@@ -100,6 +100,12 @@ describe('resolveGate integer powers', () => {
     expect(() => resolveGate(flat('h', [], Infinity))).toThrow(RangeError);
     expect(matrixOf('h', [], MAX_GATE_POWER)).toEqual([1, 0, 0, 0, 0, 0, 1, 0]);
   });
+
+  it('takes rz to the power 2^53 (beyond the safe integers, still exact as a double): rz(0)^k = I (a fuzz finding)', () => {
+    // rz(θ)^k = rz(kθ) (Nielsen & Chuang §4.2); with θ = 0 every power is the identity.
+    matrixOf('rz', [0], MAX_GATE_POWER).forEach((x, k) => expect(Math.abs(x - [1, 0, 0, 0, 0, 0, 1, 0][k]!)).toBeLessThanOrEqual(1e-15));
+    expect(() => resolveGate(flat('rz', [0.3], MAX_GATE_POWER))).not.toThrow();
+  });
 });
 
 describe('reduceAngle', () => {

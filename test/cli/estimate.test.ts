@@ -65,7 +65,7 @@ describe('polewright estimate', () => {
       [{ pair: '0,0', z: '0.2,-0.5' }, /--z needs a positive imaginary part/],
       [{ pair: '0,0' }, /exactly one of --z re,im and --grid/],
       [{ pair: '0,0', z: '0.2,0.5', route: 'sideways' }, /--route must be "preconditioned" or "direct"/],
-      [{ pair: '0,0', z: '0.2,0.5', shots: '0' }, /--shots must be at least 1/],
+      [{ pair: '0,0', z: '0.2,0.5', shots: '0' }, /--shots must be a whole number from 1 to 1000000000/],
     ];
     for (const [given, message] of cases) {
       const options = { route: 'direct', seed: '1', precision: '1e-6', ...given } as EstimateCommandOptions;

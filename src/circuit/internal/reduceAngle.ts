@@ -54,11 +54,14 @@ function toDouble(reduced: bigint): number {
 }
 
 /**
- * (k·a) mod (periodInPi·π), as a double in [−periodInPi·π/2, periodInPi·π/2). `k` must be a safe
- * integer and `a` finite; the result is within a few ulps of the exactly reduced value.
+ * (k·a) mod (periodInPi·π), as a double in [−periodInPi·π/2, periodInPi·π/2). `k` must be an integer of
+ * magnitude at most 2^53 (every such double is exact, so BigInt(k) is too) and `a` finite; the result is within a
+ * few ulps of the exactly reduced value.
  */
 export function reduceAngle(k: number, a: number, periodInPi: 2 | 4): number {
-  if (!Number.isSafeInteger(k) || !Number.isFinite(a)) throw new RangeError(`reduceAngle: needs a safe integer and a finite angle, got ${k} and ${a}`);
+  if (!Number.isInteger(k) || Math.abs(k) > 2 ** 53 || !Number.isFinite(a)) {
+    throw new RangeError(`reduceAngle: needs an integer of magnitude at most 2^53 and a finite angle, got ${k} and ${a}`);
+  }
   if (k === 0 || a === 0) return 0;
   const { mantissa, exponent } = decompose(a);
   const shift = BigInt(exponent) + FRACTION_BITS;

@@ -17,10 +17,10 @@ import { prepareBlockOnZeroAncillas } from '../../sim/simulateBlockOnZeroAncilla
 import { MAX_SIMULATION_WORK } from '../../verify/checkModelBlocks.js';
 import { formatTable } from '../format/formatTable.js';
 import { jsonHeader } from '../format/jsonHeader.js';
-import { parseNonNegativeInteger, parsePositiveInteger, parsePositiveNumber } from '../options.js';
+import { MAX_SHOTS, parseNonNegativeInteger, parsePositiveInteger, parsePositiveNumber } from '../options.js';
 import { exactGreenAt, type ExactValue } from '../readout/exactGreenAt.js';
 import { formatComplex } from '../readout/formatComplex.js';
-import { packageVersion } from '../readout/packageVersion.js';
+import { VERSION } from '../../core/version.js';
 import { parseComplexZ, parsePair, parseRoute } from '../readout/parseReadoutOptions.js';
 import { partsSummary, partsTable } from '../readout/partsSummary.js';
 import { routeResolvent } from '../readout/routeResolvent.js';
@@ -103,7 +103,7 @@ export async function estimateCommand(file: string, options: EstimateCommandOpti
   const started = performance.now();
   const route = parseRoute(options.route);
   const precision = parsePositiveNumber('--precision', options.precision);
-  const shots = options.shots === undefined ? undefined : parsePositiveInteger('--shots', options.shots);
+  const shots = options.shots === undefined ? undefined : parsePositiveInteger('--shots', options.shots, MAX_SHOTS);
   const seed = parseNonNegativeInteger('--seed', options.seed);
   if ((options.z === undefined) === (options.grid === undefined)) throw new InputError('estimate needs exactly one of --z re,im and --grid from:to:points');
   const single = options.z === undefined ? undefined : parseComplexZ(options.z);
@@ -149,7 +149,7 @@ export async function estimateCommand(file: string, options: EstimateCommandOpti
     };
     const common = {
       ...jsonHeader('estimate', inputs),
-      version: packageVersion(),
+      version: VERSION,
       model: model.name,
       pair,
       route,

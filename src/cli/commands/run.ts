@@ -21,7 +21,7 @@ import { MAX_QUBITS, stateVectorBytes } from '../../sim/StateVector.js';
 import { formatTable } from '../format/formatTable.js';
 import { jsonHeader } from '../format/jsonHeader.js';
 import { plural } from '../../core/plural.js';
-import { parseNonNegativeInteger, parsePositiveInteger } from '../options.js';
+import { MAX_SHOTS, parseNonNegativeInteger, parsePositiveInteger } from '../options.js';
 
 /** Seed of the shot sampler when --seed is not given. */
 export const DEFAULT_SEED = 1;
@@ -34,9 +34,6 @@ export const MAX_RUN_GATES = 2 ** 24;
 
 /** Largest OpenQASM program `run` reads: 4 MiB (parsing takes about 160 bytes of memory per byte of text). */
 export const MAX_QASM_FILE_BYTES = 4 * 2 ** 20;
-
-/** Most shots `run --shots` draws: 10^9 (under a minute when the exact distribution is sampled; shot-by-shot trajectories take longer and show progress). */
-export const MAX_SHOTS = 1_000_000_000;
 
 /** Sampling at least this many shots shows a progress bar (when stderr is a terminal). */
 const PROGRESS_FROM_SHOTS = 1_000_000;

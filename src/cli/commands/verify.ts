@@ -12,7 +12,7 @@ import { unitaryQasmCircuit } from '../../verify/unitaryQasmCircuit.js';
 import { verifyCircuit, type CircuitVerification } from '../../verify/verifyCircuit.js';
 import { parsePositiveInteger, parsePositiveNumber } from '../options.js';
 import { jsonHeader } from '../format/jsonHeader.js';
-import { packageVersion } from '../readout/packageVersion.js';
+import { VERSION } from '../../core/version.js';
 
 interface VerifyOptions {
   readonly encodes: string;
@@ -122,7 +122,7 @@ export function registerVerifyCommand(program: Command): void {
           ...inputs, alpha: alpha ?? null, system: options.system ?? null, signal: signal ?? null, clean: clean ?? null, seed, tolerance,
         });
         const { ok, ...figures } = result;
-        process.stdout.write(`${JSON.stringify({ ...header, ok, version: packageVersion(), ...inputs, ...figures }, null, 2)}\n`);
+        process.stdout.write(`${JSON.stringify({ ...header, ok, version: VERSION, ...inputs, ...figures }, null, 2)}\n`);
       } else process.stdout.write(formatText(circuitFile, options.encodes, result));
       if (!result.ok) process.exitCode = 1;
     });
