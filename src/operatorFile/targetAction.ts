@@ -6,6 +6,7 @@ import { jordanWigner } from '../operators/jordanWigner.js';
 import type { PauliSum } from '../operators/PauliSum.js';
 import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { targetSizeProblem, type TargetOperator } from './TargetOperator.js';
+import { popcount32 } from '../operators/internal/popcount.js';
 
 export interface ComplexVector {
   readonly re: Float64Array;
@@ -66,11 +67,6 @@ function denseAction(M: ComplexMatrix): TargetAction {
   };
 }
 
-function popcount(v: number): number {
-  let x = v - ((v >>> 1) & 0x55555555);
-  x = (x & 0x33333333) + ((x >>> 2) & 0x33333333);
-  return (((x + (x >>> 4)) & 0x0f0f0f0f) * 0x01010101) >>> 24;
-}
 
 /** Powers of i: i^k for k = 0…3. */
 const I_POWER_RE = [1, 0, -1, 0];
@@ -82,7 +78,7 @@ function pauliAction(sum: PauliSum): TargetAction {
   const terms = sum.terms.map((t) => {
     const x = Number(t.x);
     const z = Number(t.z);
-    const k = popcount(x & z) % 4;
+    const k = popcount32(x & z) % 4;
     return { x, z, re: t.re * I_POWER_RE[k]! - t.im * I_POWER_IM[k]!, im: t.re * I_POWER_IM[k]! + t.im * I_POWER_RE[k]! };
   });
   return {
@@ -95,7 +91,7 @@ function pauliAction(sum: PauliSum): TargetAction {
           const ar = input.re[c]!;
           const ai = input.im[c]!;
           if (ar === 0 && ai === 0) continue;
-          const s = (popcount(t.z & c) & 1) === 0 ? 1 : -1;
+          const s = (popcount32(t.z & c) & 1) === 0 ? 1 : -1;
           const target = c ^ t.x;
           re[target]! += s * (t.re * ar - t.im * ai);
           im[target]! += s * (t.re * ai + t.im * ar);
@@ -107,7 +103,7 @@ function pauliAction(sum: PauliSum): TargetAction {
       const re = new Float64Array(dim);
       const im = new Float64Array(dim);
       for (const t of terms) {
-        const s = (popcount(t.z & j) & 1) === 0 ? 1 : -1;
+        const s = (popcount32(t.z & j) & 1) === 0 ? 1 : -1;
         re[j ^ t.x]! += s * t.re;
         im[j ^ t.x]! += s * t.im;
       }

@@ -14,28 +14,29 @@ import { fockReference } from './checkModelBlocks.js';
 import { fockOperatorMatrix, MAX_DENSE_FOCK_MODES, modelFockTerms, type FockTerm } from './internal/fockOperatorMatrix.js';
 import { sectorResolvent } from './internal/sectorResolvent.js';
 import { denseReference } from './verifyEncoding.js';
+import { popcount32 } from '../operators/internal/popcount.js';
 
 /** Up to this width verifyEncoding checks every column anyway. */
 const EXHAUSTIVE_LIMIT = 12;
 /** Largest simulated amplitude count (columns × 2^width) for which the fast-inverse rows are checked column by column. */
 export const COLUMN_CHECK_BUDGET = 2 ** 22;
 
-function popcount(x: number): number {
-  let count = 0;
-  for (let v = x; v !== 0; v &= v - 1) count++;
-  return count;
+
+/** Every basis state with exactly N electrons (ones), in increasing order. */
+export function sectorStates(modes: number, N: number): number[] {
+  const states: number[] = [];
+  for (let s = 0; s < 2 ** modes; s++) if (popcount32(s) === N) states.push(s);
+  return states;
 }
 
 /** Every basis state with N electrons, then the first basis state of each other electron number. */
 export function sectorColumns(modes: number, N: number): number[] {
-  const inside: number[] = [];
   const others = new Map<number, number>();
   for (let s = 0; s < 2 ** modes; s++) {
-    const count = popcount(s);
-    if (count === N) inside.push(s);
-    else if (!others.has(count)) others.set(count, s);
+    const count = popcount32(s);
+    if (count !== N && !others.has(count)) others.set(count, s);
   }
-  return [...inside, ...others.values()];
+  return [...sectorStates(modes, N), ...others.values()];
 }
 
 function shiftTerms(model: FermionModel, w: ComplexScalar): FockTerm[] {

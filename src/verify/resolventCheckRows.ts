@@ -18,22 +18,12 @@ import { unbuiltRow, type CheckRow } from './encodingCheck.js';
 import { fockOperatorMatrix, MAX_DENSE_FOCK_MODES, modelFockTerms } from './internal/fockOperatorMatrix.js';
 import { sectorConditionNumber } from './internal/sectorConditionNumber.js';
 import { sectorResolvent } from './internal/sectorResolvent.js';
+import { sectorStates } from './inversionCheckItems.js';
 import { denseReference } from './verifyEncoding.js';
 
 export interface ResolventCheckRowOptions {
   readonly E0: number;
   readonly z: ComplexScalar;
-}
-
-/** Basis states of `modes` qubits with exactly N ones, in increasing order. */
-function sectorBasis(modes: number, N: number): number[] {
-  const states: number[] = [];
-  for (let s = 0; s < 2 ** modes; s++) {
-    let count = 0;
-    for (let v = s; v !== 0; v &= v - 1) count++;
-    if (count === N) states.push(s);
-  }
-  return states;
 }
 
 /** The rows in the order of resolventCheckPlans, each encoding built with ε = thresholds.precision. */
@@ -46,10 +36,10 @@ export function resolventCheckRows(model: FermionModel, options: ResolventCheckR
   const denseH = () => (hamiltonian ??= fockOperatorMatrix(modelFockTerms(model, 'all'), n));
   const denseA = () => (oneBody ??= fockOperatorMatrix(modelFockTerms(model, 'A'), n));
   return plans.map((plan) => {
+    const states = sectorStates(n, plan.electrons);
     let encoding;
     try {
       if (plan.route === 'preconditioned') {
-        const states = sectorBasis(n, plan.electrons);
         const exact = sectorConditionNumber(denseH(), denseA(), plan.w, identityShiftOfB(model), plan.electrons, states);
         encoding = plan.build({ electrons: plan.electrons, conditionBound: Math.max(1, exact * (1 + 1e-9)) });
       } else {
@@ -60,6 +50,6 @@ export function resolventCheckRows(model: FermionModel, options: ResolventCheckR
       return unbuiltRow(plan.label, n, `not built: ${error.message}`);
     }
     const reference = () => denseReference(sectorResolvent(denseH(), plan.w, { min: plan.electrons, max: plan.electrons }));
-    return checkItem({ encoding, reference, columns: sectorBasis(n, plan.electrons) }, thresholds);
+    return checkItem({ encoding, reference, columns: states }, thresholds);
   });
 }

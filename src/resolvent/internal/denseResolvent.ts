@@ -10,12 +10,8 @@ import type { FermionModel } from '../../model/FermionModel.js';
 import { ladderSumMatrix } from '../../operators/ladderSumMatrix.js';
 import { modelHamiltonian } from '../../operators/modelHamiltonian.js';
 import { ensureFits } from '../../core/memoryBudget.js';
+import { popcount32 } from '../../operators/internal/popcount.js';
 
-function popcount(s: number): number {
-  let c = 0;
-  for (let v = s; v !== 0; v &= v - 1) c++;
-  return c;
-}
 
 export function denseResolvent(model: FermionModel, w: ComplexScalar, window: { readonly min: number; readonly max: number } | null): ComplexMatrix {
   const dim = 2 ** model.modes;
@@ -30,7 +26,7 @@ export function denseResolvent(model: FermionModel, w: ComplexScalar, window: { 
     weightRe[k] = dr / norm;
     weightIm[k] = -w.im / norm;
   }
-  const inside = Uint8Array.from({ length: dim }, (_, s) => (window === null || (popcount(s) >= window.min && popcount(s) <= window.max) ? 1 : 0));
+  const inside = Uint8Array.from({ length: dim }, (_, s) => (window === null || (popcount32(s) >= window.min && popcount32(s) <= window.max) ? 1 : 0));
   const re = new Float64Array(dim * dim);
   const im = new Float64Array(dim * dim);
   for (let i = 0; i < dim; i++) {

@@ -6,12 +6,8 @@
 import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 import { zeroMatrix } from '../../linalg/zeroMatrix.js';
+import { popcount32 } from '../../operators/internal/popcount.js';
 
-function popcount(x: number): number {
-  let count = 0;
-  for (let v = x; v !== 0; v &= v - 1) count++;
-  return count;
-}
 
 /** In-place inverse of the d×d complex matrix (re, im); returns it. */
 function invert(re: Float64Array, im: Float64Array, d: number): { re: Float64Array; im: Float64Array } {
@@ -58,7 +54,7 @@ export function sectorResolvent(A: ComplexMatrix, w: ComplexScalar, window: { re
   const dim = A.n;
   const out = zeroMatrix(dim);
   for (let N = window.min; N <= window.max; N++) {
-    const basis = Array.from({ length: dim }, (_, s) => s).filter((s) => popcount(s) === N);
+    const basis = Array.from({ length: dim }, (_, s) => s).filter((s) => popcount32(s) === N);
     const d = basis.length;
     const re = new Float64Array(d * d);
     const im = new Float64Array(d * d);
