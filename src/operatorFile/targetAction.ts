@@ -7,6 +7,7 @@ import type { PauliSum } from '../operators/PauliSum.js';
 import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { targetSizeProblem, type TargetOperator } from './TargetOperator.js';
 import { popcount32 } from '../operators/internal/popcount.js';
+import { matrixColumn } from '../linalg/matrixColumn.js';
 
 export interface ComplexVector {
   readonly re: Float64Array;
@@ -55,15 +56,7 @@ function denseAction(M: ComplexMatrix): TargetAction {
       }
       return { re, im };
     },
-    column(j) {
-      const re = new Float64Array(dim);
-      const im = new Float64Array(dim);
-      for (let i = 0; i < dim; i++) {
-        re[i] = M.re[i * dim + j]!;
-        im[i] = M.im[i * dim + j]!;
-      }
-      return { re, im };
-    },
+    column: (j) => matrixColumn(M, j),
   };
 }
 

@@ -11,6 +11,7 @@ import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { StateVector } from '../sim/StateVector.js';
 import { prepareBlockOnZeroAncillas, type BlockOnZeroAncillas } from '../sim/simulateBlockOnZeroAncillas.js';
 import type { SimulationOptions } from '../sim/SimulationOptions.js';
+import { matrixColumn } from '../linalg/matrixColumn.js';
 
 /** The operator an encoding is checked against, given by its action (so it need not be formed densely). */
 export interface ReferenceOperator {
@@ -75,15 +76,7 @@ export function denseReference(M: ComplexMatrix): ReferenceOperator {
     dimension: dim,
     apply: (re, im) => product(re, im, false),
     applyAdjoint: (re, im) => product(re, im, true),
-    column: (j) => {
-      const re = new Float64Array(dim);
-      const im = new Float64Array(dim);
-      for (let i = 0; i < dim; i++) {
-        re[i] = M.re[i * dim + j]!;
-        im[i] = M.im[i * dim + j]!;
-      }
-      return { re, im };
-    },
+    column: (j) => matrixColumn(M, j),
   };
 }
 
