@@ -91,9 +91,9 @@ function complete(energies: Float64Array, window: Window, layout: Layout, target
 
 /**
  * First the coarsest power-of-two grid on which all ε_k (after a common offset when the window is one electron number)
- * are integer multiples within 1e-12 and that fits maxBits (every value then stands for one energy). Else grids from
- * coarse to fine: the first whose rounding + decomposition bound at w is ≤ budget; when none fits maxBits (and the
- * hull table its limit), the finest that does, marked `capped`.
+ * are integer multiples within 1e-12 and that fits maxBits (every value then stands for one energy). Else, among the grids
+ * that fit maxBits (and the hull table its limit), a coarse one whose rounding + decomposition bound at w is ≤ budget,
+ * found by bisection; when even the finest misses the budget, the finest, marked `capped`.
  */
 export function energyGrid(energies: Float64Array, window: Window, target: GridTarget): EnergyGrid {
   const offsets = window.min === window.max && energies.length > 0 ? [0, energies[0]!] : [0];
@@ -109,14 +109,30 @@ export function energyGrid(energies: Float64Array, window: Window, target: GridT
     }
   }
   const offset = offsets[offsets.length - 1]!;
-  let finest: EnergyGrid | null = null;
+  const layouts: Layout[] = [];
   for (let j = -Math.ceil(Math.log2(spreadOf(offset))); j <= 60; j++) {
     const layout = layoutFor(energies, window, 2 ** -j, offset);
     if (!fits(layout, window, target.maxBits)) break;
-    finest = complete(energies, window, layout, target, false);
-    if (finest.values.rounding + finest.values.decomposition <= target.budget) return finest;
+    layouts.push(layout);
   }
-  if (finest !== null) return { ...finest, capped: true };
+  if (layouts.length > 0) {
+    // Each candidate costs a hull table; the finest is tried first (when it misses the budget, coarser grids are not tried), then a
+    // bisection for the coarsest that meets it. Every grid returned as uncapped meets the budget.
+    const meets = (grid: EnergyGrid): boolean => grid.values.rounding + grid.values.decomposition <= target.budget;
+    let best = complete(energies, window, layouts[layouts.length - 1]!, target, false);
+    if (!meets(best)) return { ...best, capped: true };
+    let coarse = -1;
+    let fine = layouts.length - 1;
+    while (fine - coarse > 1) {
+      const middle = (coarse + fine) >> 1;
+      const grid = complete(energies, window, layouts[middle]!, target, false);
+      if (meets(grid)) {
+        fine = middle;
+        best = grid;
+      } else coarse = middle;
+    }
+    return best;
+  }
   const coarsest = layoutFor(energies, window, 2 ** Math.ceil(Math.log2(spreadOf(offset) || 1)), offset);
   let layout = coarsest;
   while (!fits(layout, window, target.maxBits)) layout = layoutFor(energies, window, layout.step * 2, offset);
