@@ -1,10 +1,12 @@
 // sectorHamiltonian: products agree with the dense Jordan–Wigner matrix of an independent reference;
-// products (plain and fused Lanczos steps) split among worker threads give the same bytes as on one thread.
+// products (plain and fused Lanczos steps) split among the workers of the shared pool (src/core/workerPool.ts) give the
+// same bytes as on one thread.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { fockSector, type FockSector } from '../../src/exact/fockSector.js';
 import { groundSectorSpec, shiftedSpec } from '../../src/exact/internal/modelSectors.js';
 import { randomVector } from '../../src/exact/internal/randomVector.js';
+import { closeExactWorkers } from '../../src/exact/internal/rowThreads.js';
 import { SHARED_LENGTH, sharedFloat32, zeroVec, type CVec } from '../../src/exact/internal/vec.js';
 import type { FermionModel } from '../../src/model/FermionModel.js';
 import { sectorHamiltonian } from '../../src/exact/sectorHamiltonian.js';
@@ -156,5 +158,25 @@ describe('sectorHamiltonian(model, sector, { threads })', () => {
     expect(product(1).equals(reference[1]!)).toBe(true);
     expect(product(0).equals(reference[0]!)).toBe(true);
     threaded[1]!.release();
+  });
+
+  it('goes on on the calling thread with the same bytes after closeExactWorkers, and starts new workers for a new sector', async () => {
+    const model = hubbard({ sites: 10, hopping: 1, interaction: 4, chemicalPotential: 2, ring: true, spin: 0 });
+    const sector = fockSector(groundSectorSpec(model));
+    const x = randomVector(sector.dimension, false, 5);
+    const product = (h: ReturnType<typeof sectorHamiltonian>): Buffer => {
+      const y = zeroVec(sector.dimension, false);
+      h.apply(x, y);
+      return Buffer.from(y.re.buffer);
+    };
+    const reference = product(sectorHamiltonian(model, sector, { threads: 1 }));
+    const live = sectorHamiltonian(model, sector, { threads: 2 });
+    expect(product(live).equals(reference)).toBe(true);
+    await closeExactWorkers();
+    expect(product(live).equals(reference)).toBe(true);
+    live.release();
+    const fresh = sectorHamiltonian(model, sector, { threads: 2 });
+    expect(product(fresh).equals(reference)).toBe(true);
+    fresh.release();
   });
 });

@@ -1,41 +1,32 @@
 /**
- * kernelWorker: a pool worker thread that applies realKernel to its share of the rows of vectors held
- * in SharedArrayBuffers, then flags its slot of a shared Int32Array and wakes the caller
- * (Atomics.notify). It keeps the tables of every sector it was set up for until told to forget it.
+ * kernelWorker: the job module of the exact solver's worker pool (src/core/workerPool.ts) — applies realKernel to its
+ * part of the rows of vectors held in SharedArrayBuffers. It keeps the tables of every sector it was set up for until
+ * told to forget it, so a product posts only its vectors.
  */
-import { parentPort } from 'node:worker_threads';
+import { serveWorkerPoolJobs } from '../../core/workerPoolWorker.js';
 import { applyRealRows, applyRowUpdate, type KernelBlock, type RowUpdate, type RowStep } from './realKernel.js';
 
+export type KernelJob =
+  | { readonly kind: 'setup'; readonly id: number; readonly blocks: readonly KernelBlock[]; readonly diagonal: Float64Array }
+  | { readonly kind: 'forget'; readonly id: number }
+  | { readonly kind: 'update'; readonly id: number; readonly op: RowUpdate }
+  | { readonly kind: 'product'; readonly id: number; readonly x: Float64Array; readonly y: Float64Array; readonly step: RowStep | null };
+
 interface Setup {
-  readonly id: number;
   readonly blocks: readonly KernelBlock[];
   readonly diagonal: Float64Array;
-  readonly part: number;
-  readonly parts: number;
-  readonly done: Int32Array;
-  readonly slot: number;
 }
 
-type Job = { readonly id: number } & ({ op: RowUpdate } | { x: Float64Array; y: Float64Array; step: RowStep | null });
-
 const setups = new Map<number, Setup>();
-parentPort!.on('message', (message: { setup: Setup } | { forget: number } | Job) => {
-  if ('setup' in message) {
-    setups.set(message.setup.id, message.setup);
-    return;
+
+serveWorkerPoolJobs((message, part, parts) => {
+  const job = message as KernelJob;
+  if (job.kind === 'setup') setups.set(job.id, { blocks: job.blocks, diagonal: job.diagonal });
+  else if (job.kind === 'forget') setups.delete(job.id);
+  else {
+    const setup = setups.get(job.id);
+    if (!setup) throw new Error(`kernelWorker: sector ${job.id} was not set up`);
+    if (job.kind === 'update') applyRowUpdate(setup.blocks, job.op, part, parts);
+    else applyRealRows(setup.blocks, setup.diagonal, job.x, job.y, part, parts, job.step);
   }
-  if ('forget' in message) {
-    setups.delete(message.forget);
-    return;
-  }
-  const s = setups.get(message.id)!;
-  let state = 1;
-  try {
-    if ('op' in message) applyRowUpdate(s.blocks, message.op, s.part, s.parts);
-    else applyRealRows(s.blocks, s.diagonal, message.x, message.y, s.part, s.parts, message.step);
-  } catch {
-    state = 2;
-  }
-  Atomics.store(s.done, s.slot, state);
-  Atomics.notify(s.done, s.slot);
 });

@@ -1,16 +1,13 @@
 /**
- * rowThreads: splits realKernel's rows between the calling thread and worker threads sharing the
- * vectors (SharedArrayBuffer); the caller blocks on Atomics.wait until every worker has flagged done.
- * The workers form one process-wide pool, started on first use (~0.1 s each from sources) and kept
- * for later sectors; they are unref'd, so they never keep the process alive.
+ * rowThreads: splits realKernel's rows between the calling thread and the workers of the exact solver's pool
+ * (src/core/workerPool.ts, job module kernelWorker.ts) sharing the vectors (SharedArrayBuffer). The pool is started on
+ * first use (~0.1 s per worker from dist/) and kept for later sectors (a larger thread count starts a larger one); its
+ * workers are unref'd, so they never keep the process alive, and closeExactWorkers ends them — a sector whose pool was
+ * closed goes on on the calling thread, with the same bytes.
  */
-import { createRequire } from 'node:module';
-import { pathToFileURL } from 'node:url';
-import { Worker } from 'node:worker_threads';
+import { createWorkerPool, type WorkerPool } from '../../core/workerPool.js';
+import type { KernelJob } from './kernelWorker.js';
 import { applyRealRows, applyRowUpdate, type KernelBlock, type RowUpdate, type RowStep } from './realKernel.js';
-
-/** Longest wait for a worker's share of one product before giving up. */
-const WAIT_MS = 120_000;
 
 export interface RowThreads {
   /** y = H x (then `step`, if any) with every vector SharedArrayBuffer-backed. */
@@ -20,70 +17,71 @@ export interface RowThreads {
   release(): void;
 }
 
-/** Worker bootstrap: from TypeScript sources (tsx, vitest) register tsx's loader first. */
-function workerCode(): string {
-  const fromSource = import.meta.url.endsWith('.ts');
-  const url = new URL(fromSource ? './kernelWorker.ts' : './kernelWorker.js', import.meta.url).href;
-  if (!fromSource) return `import(${JSON.stringify(url)});`;
-  const api = pathToFileURL(createRequire(import.meta.url).resolve('tsx/esm/api')).href;
-  return `import(${JSON.stringify(api)}).then((m) => { m.register(); return import(${JSON.stringify(url)}); });`;
-}
-
 export function isShared(a: Float64Array | Float32Array): boolean {
   return a.buffer instanceof SharedArrayBuffer;
 }
 
-const pool: Worker[] = [];
-let nextSectorId = 0;
-
-function poolWorkers(count: number): Worker[] {
-  while (pool.length < count) {
-    const worker = new Worker(workerCode(), { eval: true });
-    worker.unref();
-    pool.push(worker);
-  }
-  return pool.slice(0, count);
+/** Job module: the .ts source under tsx/vitest, the compiled .js from dist/. */
+function workerModule(): URL {
+  const fromSource = import.meta.url.endsWith('.ts');
+  return new URL(fromSource ? './kernelWorker.ts' : './kernelWorker.js', import.meta.url);
 }
 
-/** `threads` ≥ 2 threads in all: the caller plus threads − 1 pool workers; `diagonal` must be shared. */
+/** Every pool started and not yet closed, largest last (sectors set up on a smaller one keep using it). */
+const pools: WorkerPool[] = [];
+let nextSectorId = 0;
+
+function poolFor(threads: number): WorkerPool {
+  const largest = pools[pools.length - 1];
+  if (largest !== undefined && largest.threads >= threads) return largest;
+  const pool = createWorkerPool({ module: workerModule(), workers: threads - 1 });
+  pools.push(pool);
+  return pool;
+}
+
+/** Ends the exact solver's workers (a later sector starts new ones). */
+export async function closeExactWorkers(): Promise<void> {
+  await Promise.all(pools.splice(0).map((pool) => pool.close()));
+}
+
+/**
+ * `threads` ≥ 2 threads in all: the caller plus threads − 1 workers (a larger pool than needed is used with all its
+ * threads; the row split gives the same bytes on any number of threads); `diagonal` must be shared.
+ */
 export function rowThreads(blocks: readonly KernelBlock[], diagonal: Float64Array, threads: number): RowThreads {
-  const workers = threads - 1;
-  const done = new Int32Array(new SharedArrayBuffer(4 * workers));
+  const workers = poolFor(threads);
   const id = nextSectorId++;
-  const team = poolWorkers(workers);
-  team.forEach((worker, w) => worker.postMessage({ setup: { id, blocks, diagonal, part: w + 1, parts: threads, done, slot: w } }));
-  let released = false;
-  const share = (message: object): void => {
-    if (released) throw new Error('rowThreads: used after release');
-    for (let w = 0; w < workers; w++) {
-      Atomics.store(done, w, 0);
-      team[w]!.postMessage({ id, ...message });
-    }
+  const parts = workers.threads;
+  const post = (job: KernelJob, own: () => void, alone: () => void): void => {
+    if (workers.closed) alone();
+    else workers.run(job, own);
   };
-  const collect = (): void => {
-    for (let w = 0; w < workers; w++) {
-      // A wake-up can be the late notify of the previous job: wait until the slot really changed.
-      while (Atomics.load(done, w) === 0) {
-        if (Atomics.wait(done, w, 0, WAIT_MS) === 'timed-out') throw new Error('rowThreads: a worker did not answer');
-      }
-      if (Atomics.load(done, w) !== 1) throw new Error('rowThreads: a worker failed');
-    }
+  post({ kind: 'setup', id, blocks, diagonal }, () => {}, () => {});
+  let released = false;
+  const live = (): void => {
+    if (released) throw new Error('rowThreads: used after release');
   };
   return {
     apply(x: Float64Array, y: Float64Array, step: RowStep | null): void {
-      share({ x, y, step });
-      applyRealRows(blocks, diagonal, x, y, 0, threads, step);
-      collect();
+      live();
+      post(
+        { kind: 'product', id, x, y, step },
+        () => applyRealRows(blocks, diagonal, x, y, 0, parts, step),
+        () => applyRealRows(blocks, diagonal, x, y, 0, 1, step),
+      );
     },
     run(op: RowUpdate): void {
-      share({ op });
-      applyRowUpdate(blocks, op, 0, threads);
-      collect();
+      live();
+      post(
+        { kind: 'update', id, op },
+        () => applyRowUpdate(blocks, op, 0, parts),
+        () => applyRowUpdate(blocks, op, 0, 1),
+      );
     },
     release(): void {
       if (released) return;
       released = true;
-      for (const worker of team) worker.postMessage({ forget: id });
+      post({ kind: 'forget', id }, () => {}, () => {});
     },
   };
 }
