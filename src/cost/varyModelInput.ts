@@ -1,8 +1,9 @@
 /**
  * varyModelInput: a copy of a model file's parsed JSON with one parameter set to a new value, for `cost --vary`. Keys:
  * `hopping` (lattice.hopping), `sites` (lattice.sites of a chain or ring; the electron number is scaled to keep the
- * filling, rounded), `interaction` (Hubbard interaction or impurity.interaction), `broadening`, `chemicalPotential`,
- * `electrons`.
+ * filling, rounded), `interaction` (Hubbard interaction, impurity.interaction or the continuum's contact g), `broadening`,
+ * `chemicalPotential`, `electrons`; continuum files: `points` (sets every n_d of continuum.points to the value, i.e. n_1
+ * in 1D; the electron number is kept, since more points refine the same box) and `box` (sets every L_d of continuum.box).
  */
 import { InputError } from '../core/InputError.js';
 
@@ -21,6 +22,11 @@ export function varyKeys(input: unknown): string[] {
     keys.push('interaction');
   }
   if (isObject(input['impurity'])) keys.push('interaction');
+  const continuum = input['continuum'];
+  if (isObject(continuum)) {
+    keys.push('points', 'box');
+    if (isObject(continuum['interaction'])) keys.push('interaction');
+  }
   keys.push('broadening');
   if (isObject(lattice) || isObject(input['impurity'])) keys.push('chemicalPotential');
   keys.push('electrons');
@@ -47,7 +53,16 @@ export function varyModelInput(input: unknown, key: string, value: number): unkn
     }
     case 'interaction':
       if (isObject(copy['impurity'])) (copy['impurity'] as Json)['interaction'] = value;
+      else if (isObject(copy['continuum'])) (copy['continuum'] as Json)['interaction'] = { contact: value };
       else copy['interaction'] = value;
+      break;
+    case 'points':
+      if (!Number.isInteger(value) || value < 1) throw new InputError(`--vary: points must be positive integers, got ${value}`);
+      everyEntry(copy['continuum'] as Json, 'points', value);
+      break;
+    case 'box':
+      if (!(value > 0)) throw new InputError(`--vary: box lengths must be positive, got ${value}`);
+      everyEntry(copy['continuum'] as Json, 'box', value);
       break;
     case 'electrons':
       if (!Number.isInteger(value) || value < 0) throw new InputError(`--vary: electrons must be non-negative integers, got ${value}`);
@@ -57,4 +72,10 @@ export function varyModelInput(input: unknown, key: string, value: number): unkn
       copy[key] = value;
   }
   return copy;
+}
+
+/** Sets every entry of the array `key` of `container` to `value` (a missing or non-array field becomes [value]). */
+function everyEntry(container: Json, key: string, value: number): void {
+  const current = container[key];
+  container[key] = Array.isArray(current) && current.length > 0 ? current.map(() => value) : [value];
 }

@@ -1,5 +1,5 @@
 /**
- * FermionModel: the one internal form every model file (explicit, lattice preset, impurity preset)
+ * FermionModel: the one internal form every model file (explicit, lattice preset, impurity preset, continuum preset)
  * is turned into. H = Σ_ij T_ij a_i† a_j + ½ Σ_ijkl V_ijkl a_i† a_j† a_l a_k (physicists' order),
  * modes numbered as in ../shared/CONVENTIONS.md (presets: all spin-up modes, then all spin-down).
  */
@@ -31,7 +31,15 @@ export type ModelForm =
       /** [L] for chain and ring, [Lx, Ly] for grid. */
       readonly size: readonly number[];
     }
-  | { readonly kind: 'impurity'; readonly bathLevels: number };
+  | { readonly kind: 'impurity'; readonly bathLevels: number }
+  | {
+      readonly kind: 'continuum';
+      readonly dimension: 1 | 2 | 3;
+      /** Grid points n_d per dimension. */
+      readonly points: readonly number[];
+      /** Box lengths L_d per dimension (bohr). */
+      readonly box: readonly number[];
+    };
 
 export interface FermionModel {
   readonly name: string;

@@ -8,7 +8,7 @@ import { MAX_MODEL_FILE_BYTES } from './modelLimits.js';
 import { parseModel } from './parseModel.js';
 
 /**
- * Reads and validates a model file (explicit, Hubbard or Anderson-impurity form).
+ * Reads and validates a model file (explicit, Hubbard, Anderson-impurity or continuum form).
  *
  * @throws InputError when the file cannot be read (naming it), is larger than MAX_MODEL_FILE_BYTES
  *         (a regular file by its size, anything else — a device, a pipe — after reading that much),

@@ -4,8 +4,11 @@
  *
  * | quantity | range |
  * |---|---|
- * | modes (explicit `modes`, 2 × lattice sites, 2 × (1 + bath levels)) | 1 … 1024 |
- * | energies (T and V entries, hopping, interaction, chemical potential, levels, couplings) | \|x\| ≤ 1e6 |
+ * | modes (explicit `modes`, 2 × lattice sites, 2 × (1 + bath levels), 2 × continuum grid points) | 1 … 1024 |
+ * | energies (T and V entries, hopping, interaction, chemical potential, levels, couplings, contact g) | \|x\| ≤ 1e6 |
+ * | continuum: box lengths, \|charge positions\| (bohr) | box 0 < L ≤ 1e6, \|x\| ≤ 1e6 |
+ * | continuum: charges, number of charges | \|Z\| ≤ 1e6, at most 1024 |
+ * | continuum: largest kinetic energy k²/2, Coulomb v(0), \|external potential\|, contact g/ΔV (hartree) | ≤ 1e6 |
  * | broadening η | 1e-9 … 1e6 |
  * | grid points (model file and `--grid`) | 1 … 100,000 |
  * | grid ends | finite, from < to when points > 1, \|ω\| ≤ 1000 × the model's energy scale |
@@ -25,6 +28,12 @@ export const MAX_GRID_POINTS = 100_000;
 /** Grid ends may reach this many energy scales from zero. */
 export const GRID_SCALE_FACTOR = 1000;
 export const MAX_MODEL_FILE_BYTES = 64 * 2 ** 20;
+/** Continuum preset: largest box length and |coordinate| of a charge (bohr). */
+export const MAX_LENGTH = 1e6;
+/** Continuum preset: largest |Z| of an external charge. */
+export const MAX_CHARGE = 1e6;
+/** Continuum preset: most external charges (their potential costs O(charges × grid points)). */
+export const MAX_EXTERNAL_CHARGES = 1024;
 
 /** R + 5η: max_i Σ_j |T_ij| (Gershgorin bound on ‖T‖) plus the largest per-mode interaction weight ½ Σ |V| (U for Hubbard). */
 export function energyScale(oneBody: ComplexMatrix, twoBody: readonly TwoBodyTerm[], broadening: number): number {

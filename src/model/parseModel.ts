@@ -1,8 +1,9 @@
-// parseModel: validates parsed model-file JSON (explicit, Hubbard or Anderson-impurity form) into a FermionModel.
+// parseModel: validates parsed model-file JSON (explicit, Hubbard, Anderson-impurity or continuum form) into a FermionModel.
 import { basename } from 'node:path';
 import type { z } from 'zod';
 import type { FermionModel } from './FermionModel.js';
 import { applySplit } from './internal/applySplit.js';
+import { buildContinuum } from './internal/buildContinuum.js';
 import { buildExplicit } from './internal/buildExplicit.js';
 import { buildHubbard } from './internal/buildHubbard.js';
 import { buildImpurity } from './internal/buildImpurity.js';
@@ -10,7 +11,7 @@ import type { BuiltHamiltonian } from './internal/BuiltHamiltonian.js';
 import { checkSpinSector } from './internal/checkSpinSector.js';
 import { defaultGrid } from './internal/defaultGrid.js';
 import { detectForm } from './internal/detectForm.js';
-import { explicitSchema, hubbardSchema, impuritySchema, type CommonInput } from './internal/modelSchemas.js';
+import { continuumSchema, explicitSchema, hubbardSchema, impuritySchema, type CommonInput } from './internal/modelSchemas.js';
 import { problemsError, type Problem } from './internal/Problem.js';
 import { energyScale, gridProblem } from './modelLimits.js';
 import { zodProblems } from './internal/zodProblems.js';
@@ -46,11 +47,16 @@ export function parseModel(input: unknown, source: string): FermionModel {
     common = data;
     spin = data.spin;
     built = buildHubbard(data, problems);
-  } else {
+  } else if (kind === 'impurity') {
     const data = validated(impuritySchema, input, source);
     common = data;
     spin = data.spin;
     built = buildImpurity(data);
+  } else {
+    const data = validated(continuumSchema, input, source);
+    common = data;
+    spin = data.spin;
+    built = buildContinuum(data, problems);
   }
   if (built === undefined) throw problemsError(source, problems);
 
@@ -65,7 +71,8 @@ export function parseModel(input: unknown, source: string): FermionModel {
   const grid = common.grid;
   const wrongGrid = grid === undefined ? undefined : gridProblem(grid, energyScale(oneBody, twoBody, broadening));
   if (wrongGrid !== undefined) problems.push({ path: ['grid'], message: wrongGrid });
-  const oneBodyInB = applySplit(oneBody, common.split?.oneBodyInB ?? [], problems);
+  const split = 'split' in common ? common.split : undefined;
+  const oneBodyInB = built.oneBodyInB ?? applySplit(oneBody, split?.oneBodyInB ?? [], problems);
   if (problems.length > 0) throw problemsError(source, problems);
 
   return {

@@ -31,7 +31,7 @@ export interface OperatorFileOptions {
   readonly part?: 'A' | 'B';
 }
 
-const MODEL_KEYS = ['modes', 'oneBody', 'twoBody', 'lattice', 'impurity'];
+const MODEL_KEYS = ['modes', 'oneBody', 'twoBody', 'lattice', 'impurity', 'continuum'];
 
 /**
  * @param input  the value JSON.parse returned.
@@ -46,7 +46,7 @@ export function parseOperatorFile(input: unknown, source: string, system: System
   const form = forms[0];
   if (form === undefined) {
     if (!MODEL_KEYS.some((key) => key in input)) {
-      throw problemsError(source, [{ path: [], message: 'cannot tell the operator form: give "matrix", "pauli" or "ladder", or a model file ("modes", "lattice" or "impurity")' }]);
+      throw problemsError(source, [{ path: [], message: 'cannot tell the operator form: give "matrix", "pauli" or "ladder", or a model file ("modes", "lattice", "impurity" or "continuum")' }]);
     }
     return modelOperator(input, source, system, options);
   }

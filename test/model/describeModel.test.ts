@@ -12,5 +12,7 @@ describe('describeModel(model)', () => {
     expect(describeModel(explicit)).toBe('e: explicit model, 3 modes, 1 electron, η = 0.5');
     const aim = parseModel({ impurity: { level: 0, interaction: 1, bath: [{ level: 0, coupling: 1 }] }, electrons: 2 }, 'a.json');
     expect(describeModel(aim)).toBe('a: Anderson impurity with 1 bath level, 4 modes, 2 electrons (all S_z), η = 0.1');
+    const wire = parseModel({ continuum: { dimension: 2, points: [2, 3], box: [1.5, 2], interaction: 'none' }, electrons: 1, spin: 1 }, 'w.json');
+    expect(describeModel(wire)).toBe('w: continuum 2D grid of 2×3 points, box 1.5×2 bohr, 12 modes, 1 electron (spin 1 fixed), η = 0.1');
   });
 });

@@ -7,6 +7,8 @@ export interface BuiltHamiltonian {
   readonly modes: number;
   readonly oneBody: ComplexMatrix;
   readonly twoBody: readonly TwoBodyTerm[];
+  /** A form whose split is fixed (the continuum preset) gives the part of T that belongs to B; others take `split`. */
+  readonly oneBodyInB?: ComplexMatrix;
   /** Presets only: spin-up modes (site order) then spin-down modes. */
   readonly spinBlocks?: { readonly up: readonly number[]; readonly down: readonly number[] };
 }

@@ -1,6 +1,6 @@
 // zodProblems: turns zod issues into Problems with plain-language messages (missing, wrong type, unknown key, range).
 import type { z } from 'zod';
-import { MAX_BROADENING, MAX_ENERGY, MAX_GRID_POINTS, MAX_MODES, MIN_BROADENING } from '../modelLimits.js';
+import { MAX_BROADENING, MAX_CHARGE, MAX_ENERGY, MAX_GRID_POINTS, MAX_LENGTH, MAX_MODES, MIN_BROADENING } from '../modelLimits.js';
 import type { Problem } from './Problem.js';
 
 export function zodProblems(error: z.ZodError): Problem[] {
@@ -19,9 +19,17 @@ export function zodProblems(error: z.ZodError): Problem[] {
 /** Longest shown form of an offending value; a huge array is cut, not printed whole. */
 const LONGEST_SHOWN = 80;
 
-/** The range modelLimits.ts gives a field, by its key, for messages about values that are not numbers at all. */
+/**
+ * The range modelLimits.ts gives a field, by its key (or by its dotted path of keys where a key means different
+ * things in different forms), for messages about values that are not numbers at all.
+ */
 const FIELD_LIMITS: ReadonlyMap<string, string> = new Map([
-  ...['hopping', 'interaction', 'chemicalPotential', 'level', 'coupling'].map((key): [string, string] => [key, `±${MAX_ENERGY}`]),
+  ...['hopping', 'interaction', 'chemicalPotential', 'level', 'coupling', 'contact'].map((key): [string, string] => [key, `±${MAX_ENERGY}`]),
+  ['continuum.points', `1 … ${MAX_MODES / 2}`],
+  ['dimension', '1 … 3'],
+  ['box', `0 … ${MAX_LENGTH} (exclusive of 0)`],
+  ['position', `±${MAX_LENGTH}`],
+  ['charge', `±${MAX_CHARGE}`],
   ['broadening', `${MIN_BROADENING} … ${MAX_BROADENING}`],
   ['points', `1 … ${MAX_GRID_POINTS}`],
   ['modes', `1 … ${MAX_MODES}`],
@@ -45,8 +53,9 @@ function shown(value: unknown): string {
 
 /** ", which must lie within …" for a field whose range modelLimits.ts gives, else "". */
 function limitOf(path: readonly (string | number)[]): string {
-  const key = [...path].reverse().find((k): k is string => typeof k === 'string');
-  const limit = key === undefined ? undefined : FIELD_LIMITS.get(key);
+  const keys = path.filter((k): k is string => typeof k === 'string');
+  const key = keys[keys.length - 1];
+  const limit = FIELD_LIMITS.get(keys.join('.')) ?? (key === undefined ? undefined : FIELD_LIMITS.get(key));
   return limit === undefined ? '' : ` (the field must lie within ${limit})`;
 }
 
