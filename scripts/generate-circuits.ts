@@ -1,5 +1,6 @@
-// generate-circuits: regenerates circuits/demo-point/ — the OpenQASM 3 Hadamard-test files, manifest.json and README.txt
-// of the built-in demo's recorded point (src/cli/readout/demoScenario.ts), exactly as `polewright demo` writes them.
+// generate-circuits: regenerates circuits/demo-point/ — the OpenQASM 3 Hadamard-test files, the block-encodings with
+// their operator files, manifest.json and README.txt of the built-in demo's recorded point
+// (src/cli/readout/demoScenario.ts), exactly as `polewright demo` writes them.
 // Run: npx tsx scripts/generate-circuits.ts [DIR]   (default circuits/demo-point)
 import { fileURLToPath } from 'node:url';
 import { loadModelFile } from '../src/model/loadModelFile.js';

@@ -64,7 +64,8 @@ export interface CircuitVerification {
 }
 
 const DEFAULT_TOLERANCE = 1e-8;
-const DEFAULT_EXHAUSTIVE_LIMIT = 12;
+/** Total qubits up to which every system basis column is checked by default (above: probe mode). */
+export const DEFAULT_EXHAUSTIVE_LIMIT = 12;
 const DEFAULT_PROBES = 8;
 const DEFAULT_SEED = 1;
 

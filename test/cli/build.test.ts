@@ -1,6 +1,7 @@
-// polewright build (built CLI): the folder of OpenQASM files, manifest.json and README.txt; the files read back and
-// simulated give the in-memory circuits' probabilities and, by the manifest's rule, G_ij(z); bad input → exit 2 with
-// nothing written.
+// polewright build (built CLI): the folder of OpenQASM files (Hadamard tests and block-encodings with operator files),
+// manifest.json and README.txt; the Hadamard-test files read back and simulated give the in-memory circuits'
+// probabilities and, by the manifest's rule, G_ij(z); bad input → exit 2 with nothing written. (That the block-encodings
+// pass their verify commands: buildVerify.test.ts.)
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -28,7 +29,8 @@ describe('polewright build', () => {
     const result = runCli(['build', DEMO, '--pair', '0,1', '--z', '-0.5,0.5', '--route', 'direct', '--out', out]);
     expect(result.stderr).toBe('');
     expect(result.status).toBe(0);
-    expect(readdirSync(out).sort()).toEqual(['README.txt', 'hole-im.qasm', 'hole-re.qasm', 'manifest.json', 'particle-im.qasm', 'particle-re.qasm']);
+    const encodings = ['H', 'A', 'B', 'a0', 'a1-dagger', 'resolvent-particle', 'particle', 'resolvent-hole', 'hole'].flatMap((name) => [`encoding-${name}.qasm`, `encoding-${name}.operator.json`]);
+    expect(readdirSync(out).sort()).toEqual(['README.txt', 'hole-im.qasm', 'hole-re.qasm', 'manifest.json', 'particle-im.qasm', 'particle-re.qasm', ...encodings].sort());
     const manifest = JSON.parse(readFileSync(join(out, 'manifest.json'), 'utf8'));
     expect(manifest.pair).toEqual([0, 1]);
     expect(manifest.z).toEqual([-0.5, 0.5]);
@@ -45,7 +47,8 @@ describe('polewright build', () => {
     );
     const value = { re: 0, im: 0 };
     for (const entry of manifest.files) {
-      expect(Object.keys(entry).sort()).toEqual(['component', 'file', 'gates', 'part', 'qubits', 'scale', 'state']);
+      expect(Object.keys(entry).sort()).toEqual(['component', 'file', 'gates', 'kind', 'part', 'qubits', 'scale', 'state']);
+      expect(entry.kind).toBe('hadamard-test');
       const text = readFileSync(join(out, entry.file), 'utf8');
       expect(text.match(/= measure /g)).toHaveLength(1);
       const circuit = parseQasm(text, entry.file);
@@ -90,6 +93,10 @@ describe('polewright build', () => {
     expect(manifest.groundEnergy).toBe(-5);
     expect(manifest.initialState).toMatch(/Slater determinant/);
     expect(manifest.files).toHaveLength(4);
+    // The dense operators of the resolvents and the parts (2^16 x 2^16) are not written; the manifest says why.
+    expect(manifest.encodings.map((e: { file: string }) => e.file)).toEqual(['encoding-H.qasm', 'encoding-A.qasm', 'encoding-B.qasm', 'encoding-a0.qasm', 'encoding-a1-dagger.qasm']);
+    expect(manifest.encodingsOmitted.map((e: { file: string }) => e.file)).toEqual(['encoding-resolvent-particle.qasm', 'encoding-particle.qasm', 'encoding-resolvent-hole.qasm', 'encoding-hole.qasm']);
+    for (const omitted of manifest.encodingsOmitted) expect(omitted.reason).toMatch(/dense 2\^16 x 2\^16 matrix/);
   });
 
   it('reports an --out path with a NUL byte as an InputError naming --out, before building (fuzz finding)', () => {

@@ -1,8 +1,10 @@
 /**
  * The `build` command: writes the Hadamard-test circuits of one G_ij(z) as OpenQASM 3 files (particle/hole × re/im, per
- * ground state when the level is degenerate) with manifest.json (the recombination rule's scales, qubits, gate counts)
- * and README.txt, the whole folder atomically. The initial state is the exact ground vector (prepared exactly), or —
- * with --energy E0, for models too large to solve — the Slater determinant of A's lowest orbitals.
+ * ground state when the level is degenerate), the bare block-encodings they use (H, A, B, a_i, a†_j, the resolvents and
+ * the parts; each with an operator file and its `verify` command), manifest.json (the recombination rule's scales,
+ * qubits, gate counts; per encoding α, registers and command) and README.txt, the whole folder atomically. The initial
+ * state is the exact ground vector (prepared exactly), or — with --energy E0, for models too large to solve — the Slater
+ * determinant of A's lowest orbitals.
  */
 import type { Command } from 'commander';
 import { InputError, isInputError } from '../../core/InputError.js';
@@ -20,6 +22,7 @@ import { formatTable } from '../format/formatTable.js';
 import { parseFiniteNumber, parsePositiveNumber } from '../options.js';
 import { formatComplex } from '../readout/formatComplex.js';
 import { parseComplexZ, parsePair, parseRoute } from '../readout/parseReadoutOptions.js';
+import { readoutEncodings } from '../readout/readoutEncodings.js';
 import { readoutFolderFiles } from '../readout/readoutFolderFiles.js';
 import { routeResolvent } from '../readout/routeResolvent.js';
 import { solvedGround } from '../readout/solvedGround.js';
@@ -75,6 +78,7 @@ export function buildCommand(file: string, options: BuildCommandOptions): void {
   const resolvent = routeResolvent(model, route, precision);
   const parts = greenParts({ modes: model.modes, electrons: model.electrons, groundEnergy: start.energy, pair, z, resolvent: resolvent.factory });
   const tests = hadamardTests(parts, start.states);
+  const encodings = readoutEncodings(model, pair, parts, route);
   const files = readoutFolderFiles(tests, {
     model: model.name,
     pair,
@@ -84,7 +88,7 @@ export function buildCommand(file: string, options: BuildCommandOptions): void {
     precision,
     initialState: start.description,
     states: start.states.length,
-  }, jsonHeader('build', { model: file, pair, z: [z.re, z.im], route, precision, energy: energy ?? null, out: options.out }));
+  }, jsonHeader('build', { model: file, pair, z: [z.re, z.im], route, precision, energy: energy ?? null, out: options.out }), encodings);
   writeFolderAtomic(options.out, files, { label: '--out', onlyReplace: topLevelNames(files) });
   const table = formatTable(
     ['file', 'part', 'component', 'scale', 'qubits', 'gates'],
@@ -99,7 +103,8 @@ export function buildCommand(file: string, options: BuildCommandOptions): void {
       `initial state: ${start.description}`,
       table,
       `rule: G = Σ scale·(2·P(result = 0) − 1)·(1 for re, i for im)`,
-      `wrote: ${options.out}/ (${plural(tests.length, 'OpenQASM file')}, manifest.json, README.txt)`,
+      `wrote: ${options.out}/ (${plural(tests.length, 'Hadamard-test OpenQASM file')}, ${plural(encodings.encodings.length, 'block-encoding')} with operator files, manifest.json, README.txt)`,
+      `check the block-encodings: the "verify" commands in README.txt or manifest.json, run in ${options.out}/`,
       '',
     ].join('\n'),
   );

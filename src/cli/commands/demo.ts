@@ -145,7 +145,7 @@ export async function demoCommand(options: DemoCommandOptions): Promise<void> {
   const passed = checkRows.filter((r) => r.verdict === 'pass').length;
   process.stdout.write(
     `${summary}\ncheck: ${passed} of ${checkRows.length} blocks pass (check.txt)\n` +
-      `wrote: ${options.out}/spectrum.svg, table.txt, points.csv, check.txt, circuits/ (${circuits.size - 2} OpenQASM files, manifest.json, README.txt)\n` +
+      `wrote: ${options.out}/spectrum.svg, table.txt, points.csv, check.txt, circuits/ (${[...circuits.keys()].filter((name) => name.endsWith('.qasm')).length} OpenQASM files — Hadamard tests and block-encodings — with operator files, manifest.json, README.txt)\n` +
       `run time: ${seconds.toFixed(1)} s\n`,
   );
 }

@@ -9,6 +9,7 @@ import type { FermionModel } from '../../model/FermionModel.js';
 import { greenParts } from '../../readout/greenParts.js';
 import { hadamardTests } from '../../readout/hadamardTests.js';
 import { jsonHeader } from '../format/jsonHeader.js';
+import { readoutEncodings } from './readoutEncodings.js';
 import { readoutFolderFiles } from './readoutFolderFiles.js';
 import { routeResolvent } from './routeResolvent.js';
 import type { SolvedGround } from './solvedGround.js';
@@ -27,11 +28,12 @@ export const DEMO_PRECISION = 1e-7;
 /** The point whose circuits are written out: ω = −0.75 on the preconditioned route. */
 export const DEMO_POINT = { omega: -0.75, route: 'preconditioned' as const };
 
-/** The readout folder (OpenQASM files, manifest.json, README.txt) of DEMO_POINT, rendered in memory. */
+/** The readout folder (Hadamard tests, block-encodings with operator files, manifest.json, README.txt) of DEMO_POINT. */
 export function demoPointFiles(model: FermionModel, ground: SolvedGround): Map<string, string> {
   const z = { re: DEMO_POINT.omega, im: model.broadening };
   const resolvent = routeResolvent(model, DEMO_POINT.route, DEMO_PRECISION);
   const parts = greenParts({ modes: model.modes, electrons: model.electrons, groundEnergy: ground.energy, pair: DEMO_PAIR, z, resolvent: resolvent.factory });
+  const encodings = readoutEncodings(model, DEMO_PAIR, parts, DEMO_POINT.route);
   return readoutFolderFiles(hadamardTests(parts, ground.states), {
     model: model.name,
     pair: DEMO_PAIR,
@@ -41,5 +43,5 @@ export function demoPointFiles(model: FermionModel, ground: SolvedGround): Map<s
     precision: DEMO_PRECISION,
     initialState: ground.description,
     states: ground.states.length,
-  }, jsonHeader('demo', { pair: DEMO_PAIR, z: [z.re, z.im], route: DEMO_POINT.route, precision: DEMO_PRECISION }));
+  }, jsonHeader('demo', { pair: DEMO_PAIR, z: [z.re, z.im], route: DEMO_POINT.route, precision: DEMO_PRECISION }), encodings);
 }

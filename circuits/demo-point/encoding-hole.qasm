@@ -1,0 +1,545 @@
+OPENQASM 3.0;
+include "stdgates.inc";
+
+// annihilation_0_compute: compute part of annihilation_0
+gate annihilation_0_compute q0, q1, q2, q3, q4 {
+  h q4;
+}
+
+// annihilation_0_action: action part of annihilation_0
+gate annihilation_0_action q0, q1, q2, q3, q4 {
+  x q0;
+  cz q4, q0;
+}
+
+// annihilation_0: Jordan–Wigner a_0
+gate annihilation_0 q0, q1, q2, q3, q4 {
+  annihilation_0_compute q0, q1, q2, q3, q4;
+  annihilation_0_action q0, q1, q2, q3, q4;
+  inv @ annihilation_0_compute q0, q1, q2, q3, q4;
+}
+
+// givens_rotation: real Givens rotation R(theta) of two adjacent fermionic modes (number-conserving, no JW string between them)
+gate givens_rotation(theta) q0, q1 {
+  cx q1, q0;
+  cry(2 * theta) q0, q1;
+  cx q1, q0;
+}
+
+// phased_givens_rotation: SU(2) rotation D(psi) R(theta) D(chi) of two adjacent fermionic modes (one Givens-network element)
+gate phased_givens_rotation(theta, psi, chi) q0, q1 {
+  p(chi) q0;
+  p(-chi) q1;
+  givens_rotation(theta) q0, q1;
+  p(psi) q0;
+  p(-psi) q1;
+}
+
+// orbital_rotation: orbital rotation U(V) on 4 modes: phases, then 6 adjacent Givens rotations (rectangular mesh)
+gate orbital_rotation q0, q1, q2, q3 {
+  p(1.1780972450961724) q0;
+  p(1.1780972450961724) q1;
+  p(0.39269908169872414) q2;
+  p(0.39269908169872414) q3;
+  phased_givens_rotation(0, 0.1963495408493621, 0.1963495408493621) q0, q1;
+  phased_givens_rotation(0.3217505543966422, -1.1780972450961724, -1.5707963267948966) q2, q3;
+  phased_givens_rotation(0, 0.39269908169872414, 0.39269908169872414) q1, q2;
+  phased_givens_rotation(0.3217505543966422, -1.1102230246251565e-16, -1.5707963267948966) q0, q1;
+  phased_givens_rotation(0, 0, 0) q2, q3;
+  phased_givens_rotation(1.5707963267948966, 0, -0) q1, q2;
+}
+
+// qft_unswapped_5: quantum Fourier transform of a 5-qubit register without the final swaps
+gate qft_unswapped_5 q0, q1, q2, q3, q4 {
+  h q4;
+  cp(1.5707963267948966) q3, q4;
+  cp(0.7853981633974483) q2, q4;
+  cp(0.39269908169872414) q1, q4;
+  cp(0.19634954084936207) q0, q4;
+  h q3;
+  cp(1.5707963267948966) q2, q3;
+  cp(0.7853981633974483) q1, q3;
+  cp(0.39269908169872414) q0, q3;
+  h q2;
+  cp(1.5707963267948966) q1, q2;
+  cp(0.7853981633974483) q0, q2;
+  h q1;
+  cp(1.5707963267948966) q0, q1;
+  h q0;
+}
+
+// fourier_adder_5_4_compute: compute part of fourier_adder_5_4
+gate fourier_adder_5_4_compute(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8 {
+  qft_unswapped_5 q0, q1, q2, q3, q4;
+}
+
+// fourier_adder_5_4_action: action part of fourier_adder_5_4
+gate fourier_adder_5_4_action(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8 {
+  p(offset * 3.141592653589793) q0;
+  p(offset * 1.5707963267948966) q1;
+  p(offset * 0.7853981633974483) q2;
+  p(offset * 0.39269908169872414) q3;
+  p(offset * 0.19634954084936207) q4;
+  ctrl @ p(w0 * 3.141592653589793) q5, q0;
+  ctrl @ p(w0 * 1.5707963267948966) q5, q1;
+  ctrl @ p(w0 * 0.7853981633974483) q5, q2;
+  ctrl @ p(w0 * 0.39269908169872414) q5, q3;
+  ctrl @ p(w0 * 0.19634954084936207) q5, q4;
+  ctrl @ p(w1 * 3.141592653589793) q6, q0;
+  ctrl @ p(w1 * 1.5707963267948966) q6, q1;
+  ctrl @ p(w1 * 0.7853981633974483) q6, q2;
+  ctrl @ p(w1 * 0.39269908169872414) q6, q3;
+  ctrl @ p(w1 * 0.19634954084936207) q6, q4;
+  ctrl @ p(w2 * 3.141592653589793) q7, q0;
+  ctrl @ p(w2 * 1.5707963267948966) q7, q1;
+  ctrl @ p(w2 * 0.7853981633974483) q7, q2;
+  ctrl @ p(w2 * 0.39269908169872414) q7, q3;
+  ctrl @ p(w2 * 0.19634954084936207) q7, q4;
+  ctrl @ p(w3 * 3.141592653589793) q8, q0;
+  ctrl @ p(w3 * 1.5707963267948966) q8, q1;
+  ctrl @ p(w3 * 0.7853981633974483) q8, q2;
+  ctrl @ p(w3 * 0.39269908169872414) q8, q3;
+  ctrl @ p(w3 * 0.19634954084936207) q8, q4;
+}
+
+// fourier_adder_5_4: add offset + sum of 4 controlled constants modulo 2^5 (Draper QFT adder)
+gate fourier_adder_5_4(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8 {
+  fourier_adder_5_4_compute(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8;
+  fourier_adder_5_4_action(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8;
+  inv @ fourier_adder_5_4_compute(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8;
+}
+
+// fast_inverse_compute: compute part of fast_inverse
+gate fast_inverse_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9 {
+  orbital_rotation q0, q1, q2, q3;
+  fourier_adder_5_4(14, -7, -7, 3, 3) q5, q6, q7, q8, q9, q0, q1, q2, q3;
+}
+
+// multiplexed_ry_5: ry on the target by an angle chosen by the value of 5 selector qubits (Gray-code multiplexor)
+gate multiplexed_ry_5(t0, t1, t2, t3, t4, t5, t6, t7, t8, t9, t10, t11, t12, t13, t14, t15, t16, t17, t18, t19, t20, t21, t22, t23, t24, t25, t26, t27, t28, t29, t30, t31) q0, q1, q2, q3, q4, q5 {
+  ry(t0) q5;
+  cx q0, q5;
+  ry(t1) q5;
+  cx q1, q5;
+  ry(t2) q5;
+  cx q0, q5;
+  ry(t3) q5;
+  cx q2, q5;
+  ry(t4) q5;
+  cx q0, q5;
+  ry(t5) q5;
+  cx q1, q5;
+  ry(t6) q5;
+  cx q0, q5;
+  ry(t7) q5;
+  cx q3, q5;
+  ry(t8) q5;
+  cx q0, q5;
+  ry(t9) q5;
+  cx q1, q5;
+  ry(t10) q5;
+  cx q0, q5;
+  ry(t11) q5;
+  cx q2, q5;
+  ry(t12) q5;
+  cx q0, q5;
+  ry(t13) q5;
+  cx q1, q5;
+  ry(t14) q5;
+  cx q0, q5;
+  ry(t15) q5;
+  cx q4, q5;
+  ry(t16) q5;
+  cx q0, q5;
+  ry(t17) q5;
+  cx q1, q5;
+  ry(t18) q5;
+  cx q0, q5;
+  ry(t19) q5;
+  cx q2, q5;
+  ry(t20) q5;
+  cx q0, q5;
+  ry(t21) q5;
+  cx q1, q5;
+  ry(t22) q5;
+  cx q0, q5;
+  ry(t23) q5;
+  cx q3, q5;
+  ry(t24) q5;
+  cx q0, q5;
+  ry(t25) q5;
+  cx q1, q5;
+  ry(t26) q5;
+  cx q0, q5;
+  ry(t27) q5;
+  cx q2, q5;
+  ry(t28) q5;
+  cx q0, q5;
+  ry(t29) q5;
+  cx q1, q5;
+  ry(t30) q5;
+  cx q0, q5;
+  ry(t31) q5;
+  cx q4, q5;
+}
+
+// multiplexed_rz_5: rz on the target by an angle chosen by the value of 5 selector qubits (Gray-code multiplexor)
+gate multiplexed_rz_5(t0, t1, t2, t3, t4, t5, t6, t7, t8, t9, t10, t11, t12, t13, t14, t15, t16, t17, t18, t19, t20, t21, t22, t23, t24, t25, t26, t27, t28, t29, t30, t31) q0, q1, q2, q3, q4, q5 {
+  rz(t0) q5;
+  cx q0, q5;
+  rz(t1) q5;
+  cx q1, q5;
+  rz(t2) q5;
+  cx q0, q5;
+  rz(t3) q5;
+  cx q2, q5;
+  rz(t4) q5;
+  cx q0, q5;
+  rz(t5) q5;
+  cx q1, q5;
+  rz(t6) q5;
+  cx q0, q5;
+  rz(t7) q5;
+  cx q3, q5;
+  rz(t8) q5;
+  cx q0, q5;
+  rz(t9) q5;
+  cx q1, q5;
+  rz(t10) q5;
+  cx q0, q5;
+  rz(t11) q5;
+  cx q2, q5;
+  rz(t12) q5;
+  cx q0, q5;
+  rz(t13) q5;
+  cx q1, q5;
+  rz(t14) q5;
+  cx q0, q5;
+  rz(t15) q5;
+  cx q4, q5;
+  rz(t16) q5;
+  cx q0, q5;
+  rz(t17) q5;
+  cx q1, q5;
+  rz(t18) q5;
+  cx q0, q5;
+  rz(t19) q5;
+  cx q2, q5;
+  rz(t20) q5;
+  cx q0, q5;
+  rz(t21) q5;
+  cx q1, q5;
+  rz(t22) q5;
+  cx q0, q5;
+  rz(t23) q5;
+  cx q3, q5;
+  rz(t24) q5;
+  cx q0, q5;
+  rz(t25) q5;
+  cx q1, q5;
+  rz(t26) q5;
+  cx q0, q5;
+  rz(t27) q5;
+  cx q2, q5;
+  rz(t28) q5;
+  cx q0, q5;
+  rz(t29) q5;
+  cx q1, q5;
+  rz(t30) q5;
+  cx q0, q5;
+  rz(t31) q5;
+  cx q4, q5;
+}
+
+// fast_inverse_action: action part of fast_inverse
+gate fast_inverse_action q0, q1, q2, q3, q4, q5, q6, q7, q8, q9 {
+  multiplexed_ry_5(0.45147579306177044, 0.08163971370711412, -0.06245617459925318, 0.11049650150948835, -0.008730524984506605, 0.06368234685351926, -0.11711378562203396, 0.007356604814254486, 0.18127099504359573, -0.18856501382526036, -0.11023204337582199, 0.06272070321871978, 0.19922836189719056, 0.2716413042210167, -0.007092146680588107, 0.11737831424150054, -0.19032355242838622, -0.01737087631964463, 0.26136257458196016, -0.10847350477269617, 0.0729994328577763, 0.19746982329406476, 0.1191368528446264, 0.19154972468265224, 0.017635334453311002, 0.1905880810478528, 0.371384213523406, 0.0015482046545499117, -0.19720536516039838, -0.07273490423830971, 0.0713609840680576, 0.1437739263918837) q5, q6, q7, q8, q9, q4;
+  multiplexed_rz_5(-1.0736266094297506, -0.11581289040784452, 0.3598061255685539, -0.010569543261909287, -0.024903934486081414, 0.09903009084746861, 0.2175772898187839, 0.28945441513279, -0.08080940094513084, 0.4853797176572758, 0.4692939069253894, -0.29270636232457325, -0.29565238220044393, -0.5633429572863934, 0.16926994853069005, -0.15047752657480323, 0.5499242401041529, 0.1795485712736897, -0.5530643345433937, 0.4047493844785122, -0.3029849850675729, -0.23110785975356674, -0.2150220490216804, -0.09108802368813043, 0.2791757923897904, -0.4828244768601722, -0.6013716758314875, -0.035182557229081035, 0.6898322234170469, 0.37008474831155347, -0.10553426766484492, -0.3732248427507943) q5, q6, q7, q8, q9, q4;
+}
+
+// fast_inverse: block-encoding of (w - A)^-1 by orbital rotation, 5-bit energy arithmetic and a flag rotation
+gate fast_inverse q0, q1, q2, q3, q4, q5, q6, q7, q8, q9 {
+  fast_inverse_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9;
+  fast_inverse_action q0, q1, q2, q3, q4, q5, q6, q7, q8, q9;
+  inv @ fast_inverse_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9;
+}
+
+// qsvt_compute: compute part of qsvt
+gate qsvt_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14 {
+  h q14;
+}
+
+// qsvt_phase: signal-projector-controlled phase e^{i theta/2 (2Pi - I)}, sign set by the QSVT qubit
+gate qsvt_phase(theta) q0, q1, q2, q3, q4, q5 {
+  negctrl(5) @ x q0, q1, q2, q3, q4, q5;
+  rz(theta) q5;
+  negctrl(5) @ x q0, q1, q2, q3, q4, q5;
+}
+
+// lcu_prepare: PREPARE of I - (w - b0 - A)^-1 B'
+gate lcu_prepare q0 {
+  ry(1.772149722832506) q0;
+}
+
+// lcu_compute: compute part of lcu
+gate lcu_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13 {
+  lcu_prepare q4;
+}
+
+// identity: identity on 4 qubits
+gate identity q0, q1, q2, q3 {
+}
+
+// lcu_prepare_2: PREPARE of B' (two-body, identity moved into w)
+gate lcu_prepare_2 q0, q1, q2 {
+  ry(1.2309594173407745) q2;
+  ry(0.7853981633974483) q1;
+  cx q2, q1;
+  ry(0.7853981633974483) q1;
+  cx q2, q1;
+  ry(1.1780972450961724) q0;
+  cx q1, q0;
+  ry(0.39269908169872414) q0;
+  cx q2, q0;
+  ry(-0.39269908169872414) q0;
+  cx q1, q0;
+  ry(0.39269908169872414) q0;
+  cx q2, q0;
+}
+
+// lcu_compute_2: compute part of lcu
+gate lcu_compute_2 q0, q1, q2, q3, q4, q5, q6 {
+  lcu_prepare_2 q4, q5, q6;
+}
+
+// pauli_string: Pauli string Z0
+gate pauli_string q0, q1, q2, q3 {
+  z q0;
+}
+
+// pauli_string_2: Pauli string Z2
+gate pauli_string_2 q0, q1, q2, q3 {
+  z q2;
+}
+
+// pauli_string_3: Pauli string Z0 Z2
+gate pauli_string_3 q0, q1, q2, q3 {
+  z q0;
+  z q2;
+}
+
+// pauli_string_4: Pauli string Z1
+gate pauli_string_4 q0, q1, q2, q3 {
+  z q1;
+}
+
+// pauli_string_5: Pauli string Z3
+gate pauli_string_5 q0, q1, q2, q3 {
+  z q3;
+}
+
+// pauli_string_6: Pauli string Z1 Z3
+gate pauli_string_6 q0, q1, q2, q3 {
+  z q1;
+  z q3;
+}
+
+// lcu_action: action part of lcu
+gate lcu_action q0, q1, q2, q3, q4, q5, q6 {
+  negctrl(3) @ pauli_string q4, q5, q6, q0, q1, q2, q3;
+  negctrl(3) @ gphase(3.141592653589793) q4, q5, q6;
+  ctrl @ negctrl(2) @ pauli_string_2 q4, q5, q6, q0, q1, q2, q3;
+  ctrl @ negctrl(2) @ gphase(3.141592653589793) q4, q5, q6;
+  ctrl @ negctrl(2) @ pauli_string_3 q5, q4, q6, q0, q1, q2, q3;
+  ctrl(2) @ negctrl @ pauli_string_4 q4, q5, q6, q0, q1, q2, q3;
+  ctrl(2) @ negctrl @ gphase(3.141592653589793) q4, q5, q6;
+  ctrl @ negctrl(2) @ pauli_string_5 q6, q4, q5, q0, q1, q2, q3;
+  ctrl @ negctrl(2) @ gphase(3.141592653589793) q6, q4, q5;
+  ctrl(2) @ negctrl @ pauli_string_6 q4, q6, q5, q0, q1, q2, q3;
+}
+
+// product_c1n0: block-encoding of (w - b0 - A)^-1 B' (1 control and 0 negative-control qubits first, distributed to the body; compute parts stay uncontrolled)
+gate product_c1n0 c0, q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12 {
+  lcu_compute_2 q0, q1, q2, q3, q5, q6, q7;
+  ctrl @ lcu_action c0, q0, q1, q2, q3, q5, q6, q7;
+  inv @ lcu_compute_2 q0, q1, q2, q3, q5, q6, q7;
+  fast_inverse_compute q0, q1, q2, q3, q4, q8, q9, q10, q11, q12;
+  ctrl @ fast_inverse_action c0, q0, q1, q2, q3, q4, q8, q9, q10, q11, q12;
+  inv @ fast_inverse_compute q0, q1, q2, q3, q4, q8, q9, q10, q11, q12;
+}
+
+// lcu_action_2: action part of lcu
+gate lcu_action_2 q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13 {
+  negctrl @ identity q4, q0, q1, q2, q3;
+  product_c1n0 q4, q0, q1, q2, q3, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  ctrl @ gphase(3.141592653589793) q4;
+}
+
+// lcu: block-encoding of I - (w - b0 - A)^-1 B' by PREPARE/SELECT
+gate lcu q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13 {
+  lcu_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  lcu_action_2 q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  inv @ lcu_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+}
+
+// adjoint: block-encoding of (I - (w - b0 - A)^-1 B')†
+gate adjoint q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13 {
+  inv @ lcu q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+}
+
+// qsvt_step: one U, phase, U-dagger, phase step of the QSVT of (I - (w - b0 - A)^-1 B')†
+gate qsvt_step(theta_a, theta_b) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14 {
+  adjoint q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  qsvt_phase(theta_a) q4, q5, q6, q7, q8, q14;
+  inv @ adjoint q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  qsvt_phase(theta_b) q4, q5, q6, q7, q8, q14;
+}
+
+// qsvt_action: action part of qsvt
+gate qsvt_action q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14 {
+  qsvt_phase(8.807241380637265e-9) q4, q5, q6, q7, q8, q14;
+  qsvt_step(-3.1415926656864106, -3.141592637091622) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415926759640693, -3.141592623391059) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415926941786636, -3.141592599243606) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415927260974623, -3.1415925571795245) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415927813614233, -3.1415924847990504) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415928758627225, -3.1415923618053667) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141593035432563, -3.14159215543948) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415933014692463, -3.1415918135702534) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141593739386804, -3.141591254407767) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415944510865272, -3.1415903514474355) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141595593054207, -3.141588911812124) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141597402164516, -3.141586645645297) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1416002318189573, -3.1415831236395095) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1416046016266024, -3.1415777192004297) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1416112644061087, -3.1415695312119407) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1416212947638926, -3.1415572829774887) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141636203775783, -3.1415391927942395) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.14165808422471, -3.1415128119274853) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1416897902546737, -3.141474826673249) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1417351540057066, -3.141420822913129) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141799239615493, -3.141345014244329) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141888631765375, -3.1412399385238765) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1420117516381665, -3.1410961325210063) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.142179187783148, -3.140901800212805) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.142404023144035, -3.1406424968018585) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.142702132776747, -3.140300857305835) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1430924201363903, -3.1398564049064577) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.143596953987606, -3.139285479345146) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.144240963834998, -3.1385613286551877) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1450526501210248, -3.1376544076426196) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.146062766981827, -3.136532923227133) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.147303940446516, -3.135163659892351) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1488096934986642, -3.1335131084553) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1506131607350074, -3.1315489090548185) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1527454883423207, -3.12924160592336) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1552339284976467, -3.126566698305478) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1580996502002514, -3.1235069592261686) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.161355301238828, -3.1200549805311097) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.165002370728259, -3.1162158852413566) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.169028423210085, -3.1120101206980095) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.173404310924469, -3.1074762001980427) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1780815287834723, -3.102673189165258) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.182989962811011, -3.0976826313986328) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1880363956551827, -3.0926094897810943) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.193104255702644, -3.0875815605666284) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.198055191504207, -3.0827467605209504) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.202733060258865, -3.202733060258865) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.0827467605209504, -3.198055191504207) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.0875815605666284, -3.193104255702644) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.0926094897810943, -3.1880363956551827) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.0976826313986328, -3.182989962811011) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.102673189165258, -3.1780815287834723) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1074762001980427, -3.173404310924469) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1120101206980095, -3.169028423210085) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1162158852413566, -3.165002370728259) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1200549805311097, -3.161355301238828) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1235069592261686, -3.1580996502002514) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.126566698305478, -3.1552339284976467) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.12924160592336, -3.1527454883423207) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1315489090548185, -3.1506131607350074) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1335131084553, -3.1488096934986642) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.135163659892351, -3.147303940446516) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.136532923227133, -3.146062766981827) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1376544076426196, -3.1450526501210248) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1385613286551877, -3.144240963834998) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.139285479345146, -3.143596953987606) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1398564049064577, -3.1430924201363903) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.140300857305835, -3.142702132776747) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1406424968018585, -3.142404023144035) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.140901800212805, -3.142179187783148) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1410961325210063, -3.1420117516381665) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1412399385238765, -3.141888631765375) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141345014244329, -3.141799239615493) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141420822913129, -3.1417351540057066) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141474826673249, -3.1416897902546737) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415128119274853, -3.14165808422471) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415391927942395, -3.141636203775783) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415572829774887, -3.1416212947638926) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415695312119407, -3.1416112644061087) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415777192004297, -3.1416046016266024) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415831236395095, -3.1416002318189573) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141586645645297, -3.141597402164516) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141588911812124, -3.141595593054207) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415903514474355, -3.1415944510865272) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141591254407767, -3.141593739386804) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415918135702534, -3.1415933014692463) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.14159215543948, -3.141593035432563) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415923618053667, -3.1415928758627225) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415924847990504, -3.1415927813614233) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415925571795245, -3.1415927260974623) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141592599243606, -3.1415926941786636) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141592623391059, -3.1415926759640693) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141592637091622, -3.1415926656864106) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  adjoint q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  qsvt_phase(9.42477796957662) q4, q5, q6, q7, q8, q14;
+}
+
+// qsvt: real-part QSVT of degree 187 of (I - (w - b0 - A)^-1 B')†
+gate qsvt q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14 {
+  qsvt_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_action q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  inv @ qsvt_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+}
+
+// product: block-encoding of (I - (w - b0 - A)^-1 B')^-1 · (w - A)^-1
+gate product q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14, q15 {
+  fast_inverse q0, q1, q2, q3, q10, q11, q12, q13, q14, q15;
+  qsvt q0, q1, q2, q3, q4, q5, q6, q7, q8, q11, q12, q13, q14, q15, q9;
+}
+
+// creation_0_compute: compute part of creation_0
+gate creation_0_compute q0, q1, q2, q3, q4 {
+  h q4;
+}
+
+// creation_0_action: action part of creation_0
+gate creation_0_action q0, q1, q2, q3, q4 {
+  cz q4, q0;
+  x q0;
+}
+
+// creation_0: Jordan–Wigner a†_0
+gate creation_0 q0, q1, q2, q3, q4 {
+  creation_0_compute q0, q1, q2, q3, q4;
+  creation_0_action q0, q1, q2, q3, q4;
+  inv @ creation_0_compute q0, q1, q2, q3, q4;
+}
+
+// product_2: block-encoding of a†_0 · R(w⁻) · a_0
+gate product_2 q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14, q15, q16, q17 {
+  annihilation_0 q0, q1, q2, q3, q12;
+  product q0, q1, q2, q3, q5, q6, q7, q8, q9, q10, q11, q13, q14, q15, q16, q17;
+  creation_0 q0, q1, q2, q3, q4;
+}
+
+qubit[4] system;
+qubit[1] ladder_0;
+qubit[1] lcu_index_0_1;
+qubit[4] lcu_work_0_0_1;
+qubit[1] qsvt_signal_0_1;
+qubit[1] flag_1_1;
+qubit[1] ladder_2;
+qubit[5] shared_clean;
+
+product_2 system[0], system[1], system[2], system[3], ladder_0[0], lcu_index_0_1[0], lcu_work_0_0_1[0], lcu_work_0_0_1[1], lcu_work_0_0_1[2], lcu_work_0_0_1[3], qsvt_signal_0_1[0], flag_1_1[0], ladder_2[0], shared_clean[0], shared_clean[1], shared_clean[2], shared_clean[3], shared_clean[4];

@@ -1,0 +1,524 @@
+OPENQASM 3.0;
+include "stdgates.inc";
+
+// creation_0_compute: compute part of creation_0
+gate creation_0_compute q0, q1, q2, q3, q4 {
+  h q4;
+}
+
+// creation_0_action: action part of creation_0
+gate creation_0_action q0, q1, q2, q3, q4 {
+  cz q4, q0;
+  x q0;
+}
+
+// creation_0: Jordan–Wigner a†_0
+gate creation_0 q0, q1, q2, q3, q4 {
+  creation_0_compute q0, q1, q2, q3, q4;
+  creation_0_action q0, q1, q2, q3, q4;
+  inv @ creation_0_compute q0, q1, q2, q3, q4;
+}
+
+// givens_rotation: real Givens rotation R(theta) of two adjacent fermionic modes (number-conserving, no JW string between them)
+gate givens_rotation(theta) q0, q1 {
+  cx q1, q0;
+  cry(2 * theta) q0, q1;
+  cx q1, q0;
+}
+
+// phased_givens_rotation: SU(2) rotation D(psi) R(theta) D(chi) of two adjacent fermionic modes (one Givens-network element)
+gate phased_givens_rotation(theta, psi, chi) q0, q1 {
+  p(chi) q0;
+  p(-chi) q1;
+  givens_rotation(theta) q0, q1;
+  p(psi) q0;
+  p(-psi) q1;
+}
+
+// orbital_rotation: orbital rotation U(V) on 4 modes: phases, then 6 adjacent Givens rotations (rectangular mesh)
+gate orbital_rotation q0, q1, q2, q3 {
+  p(1.1780972450961724) q0;
+  p(1.1780972450961724) q1;
+  p(0.39269908169872414) q2;
+  p(0.39269908169872414) q3;
+  phased_givens_rotation(0, 0.1963495408493621, 0.1963495408493621) q0, q1;
+  phased_givens_rotation(0.3217505543966422, -1.1780972450961724, -1.5707963267948966) q2, q3;
+  phased_givens_rotation(0, 0.39269908169872414, 0.39269908169872414) q1, q2;
+  phased_givens_rotation(0.3217505543966422, -1.1102230246251565e-16, -1.5707963267948966) q0, q1;
+  phased_givens_rotation(0, 0, 0) q2, q3;
+  phased_givens_rotation(1.5707963267948966, 0, -0) q1, q2;
+}
+
+// qft_unswapped_5: quantum Fourier transform of a 5-qubit register without the final swaps
+gate qft_unswapped_5 q0, q1, q2, q3, q4 {
+  h q4;
+  cp(1.5707963267948966) q3, q4;
+  cp(0.7853981633974483) q2, q4;
+  cp(0.39269908169872414) q1, q4;
+  cp(0.19634954084936207) q0, q4;
+  h q3;
+  cp(1.5707963267948966) q2, q3;
+  cp(0.7853981633974483) q1, q3;
+  cp(0.39269908169872414) q0, q3;
+  h q2;
+  cp(1.5707963267948966) q1, q2;
+  cp(0.7853981633974483) q0, q2;
+  h q1;
+  cp(1.5707963267948966) q0, q1;
+  h q0;
+}
+
+// fourier_adder_5_4_compute: compute part of fourier_adder_5_4
+gate fourier_adder_5_4_compute(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8 {
+  qft_unswapped_5 q0, q1, q2, q3, q4;
+}
+
+// fourier_adder_5_4_action: action part of fourier_adder_5_4
+gate fourier_adder_5_4_action(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8 {
+  p(offset * 3.141592653589793) q0;
+  p(offset * 1.5707963267948966) q1;
+  p(offset * 0.7853981633974483) q2;
+  p(offset * 0.39269908169872414) q3;
+  p(offset * 0.19634954084936207) q4;
+  ctrl @ p(w0 * 3.141592653589793) q5, q0;
+  ctrl @ p(w0 * 1.5707963267948966) q5, q1;
+  ctrl @ p(w0 * 0.7853981633974483) q5, q2;
+  ctrl @ p(w0 * 0.39269908169872414) q5, q3;
+  ctrl @ p(w0 * 0.19634954084936207) q5, q4;
+  ctrl @ p(w1 * 3.141592653589793) q6, q0;
+  ctrl @ p(w1 * 1.5707963267948966) q6, q1;
+  ctrl @ p(w1 * 0.7853981633974483) q6, q2;
+  ctrl @ p(w1 * 0.39269908169872414) q6, q3;
+  ctrl @ p(w1 * 0.19634954084936207) q6, q4;
+  ctrl @ p(w2 * 3.141592653589793) q7, q0;
+  ctrl @ p(w2 * 1.5707963267948966) q7, q1;
+  ctrl @ p(w2 * 0.7853981633974483) q7, q2;
+  ctrl @ p(w2 * 0.39269908169872414) q7, q3;
+  ctrl @ p(w2 * 0.19634954084936207) q7, q4;
+  ctrl @ p(w3 * 3.141592653589793) q8, q0;
+  ctrl @ p(w3 * 1.5707963267948966) q8, q1;
+  ctrl @ p(w3 * 0.7853981633974483) q8, q2;
+  ctrl @ p(w3 * 0.39269908169872414) q8, q3;
+  ctrl @ p(w3 * 0.19634954084936207) q8, q4;
+}
+
+// fourier_adder_5_4: add offset + sum of 4 controlled constants modulo 2^5 (Draper QFT adder)
+gate fourier_adder_5_4(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8 {
+  fourier_adder_5_4_compute(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8;
+  fourier_adder_5_4_action(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8;
+  inv @ fourier_adder_5_4_compute(offset, w0, w1, w2, w3) q0, q1, q2, q3, q4, q5, q6, q7, q8;
+}
+
+// fast_inverse_compute: compute part of fast_inverse
+gate fast_inverse_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9 {
+  orbital_rotation q0, q1, q2, q3;
+  fourier_adder_5_4(14, -7, -7, 3, 3) q5, q6, q7, q8, q9, q0, q1, q2, q3;
+}
+
+// multiplexed_ry_5: ry on the target by an angle chosen by the value of 5 selector qubits (Gray-code multiplexor)
+gate multiplexed_ry_5(t0, t1, t2, t3, t4, t5, t6, t7, t8, t9, t10, t11, t12, t13, t14, t15, t16, t17, t18, t19, t20, t21, t22, t23, t24, t25, t26, t27, t28, t29, t30, t31) q0, q1, q2, q3, q4, q5 {
+  ry(t0) q5;
+  cx q0, q5;
+  ry(t1) q5;
+  cx q1, q5;
+  ry(t2) q5;
+  cx q0, q5;
+  ry(t3) q5;
+  cx q2, q5;
+  ry(t4) q5;
+  cx q0, q5;
+  ry(t5) q5;
+  cx q1, q5;
+  ry(t6) q5;
+  cx q0, q5;
+  ry(t7) q5;
+  cx q3, q5;
+  ry(t8) q5;
+  cx q0, q5;
+  ry(t9) q5;
+  cx q1, q5;
+  ry(t10) q5;
+  cx q0, q5;
+  ry(t11) q5;
+  cx q2, q5;
+  ry(t12) q5;
+  cx q0, q5;
+  ry(t13) q5;
+  cx q1, q5;
+  ry(t14) q5;
+  cx q0, q5;
+  ry(t15) q5;
+  cx q4, q5;
+  ry(t16) q5;
+  cx q0, q5;
+  ry(t17) q5;
+  cx q1, q5;
+  ry(t18) q5;
+  cx q0, q5;
+  ry(t19) q5;
+  cx q2, q5;
+  ry(t20) q5;
+  cx q0, q5;
+  ry(t21) q5;
+  cx q1, q5;
+  ry(t22) q5;
+  cx q0, q5;
+  ry(t23) q5;
+  cx q3, q5;
+  ry(t24) q5;
+  cx q0, q5;
+  ry(t25) q5;
+  cx q1, q5;
+  ry(t26) q5;
+  cx q0, q5;
+  ry(t27) q5;
+  cx q2, q5;
+  ry(t28) q5;
+  cx q0, q5;
+  ry(t29) q5;
+  cx q1, q5;
+  ry(t30) q5;
+  cx q0, q5;
+  ry(t31) q5;
+  cx q4, q5;
+}
+
+// multiplexed_rz_5: rz on the target by an angle chosen by the value of 5 selector qubits (Gray-code multiplexor)
+gate multiplexed_rz_5(t0, t1, t2, t3, t4, t5, t6, t7, t8, t9, t10, t11, t12, t13, t14, t15, t16, t17, t18, t19, t20, t21, t22, t23, t24, t25, t26, t27, t28, t29, t30, t31) q0, q1, q2, q3, q4, q5 {
+  rz(t0) q5;
+  cx q0, q5;
+  rz(t1) q5;
+  cx q1, q5;
+  rz(t2) q5;
+  cx q0, q5;
+  rz(t3) q5;
+  cx q2, q5;
+  rz(t4) q5;
+  cx q0, q5;
+  rz(t5) q5;
+  cx q1, q5;
+  rz(t6) q5;
+  cx q0, q5;
+  rz(t7) q5;
+  cx q3, q5;
+  rz(t8) q5;
+  cx q0, q5;
+  rz(t9) q5;
+  cx q1, q5;
+  rz(t10) q5;
+  cx q0, q5;
+  rz(t11) q5;
+  cx q2, q5;
+  rz(t12) q5;
+  cx q0, q5;
+  rz(t13) q5;
+  cx q1, q5;
+  rz(t14) q5;
+  cx q0, q5;
+  rz(t15) q5;
+  cx q4, q5;
+  rz(t16) q5;
+  cx q0, q5;
+  rz(t17) q5;
+  cx q1, q5;
+  rz(t18) q5;
+  cx q0, q5;
+  rz(t19) q5;
+  cx q2, q5;
+  rz(t20) q5;
+  cx q0, q5;
+  rz(t21) q5;
+  cx q1, q5;
+  rz(t22) q5;
+  cx q0, q5;
+  rz(t23) q5;
+  cx q3, q5;
+  rz(t24) q5;
+  cx q0, q5;
+  rz(t25) q5;
+  cx q1, q5;
+  rz(t26) q5;
+  cx q0, q5;
+  rz(t27) q5;
+  cx q2, q5;
+  rz(t28) q5;
+  cx q0, q5;
+  rz(t29) q5;
+  cx q1, q5;
+  rz(t30) q5;
+  cx q0, q5;
+  rz(t31) q5;
+  cx q4, q5;
+}
+
+// fast_inverse_action: action part of fast_inverse
+gate fast_inverse_action q0, q1, q2, q3, q4, q5, q6, q7, q8, q9 {
+  multiplexed_ry_5(0.5625188335347366, 0.023627361146604235, -0.17136241817172945, -0.08591272866944608, 0.006085890786524786, -0.035337309015310236, -0.1371212974033034, -0.16249822069799677, 0.0007069178633844903, -0.27806360153355913, -0.1985424475766915, 0.14702819491678057, 0.05967158802529894, 0.2783693412146526, -0.12195695554814076, 0.11278707414835452, -0.2117452814935976, -0.12629559199131418, 0.2740307047714793, -0.2648607676166531, 0.15136683135995396, 0.1259899080652606, 0.04646875410839292, 0.005045554306557884, -0.15815958425482338, 0.1874110582386487, 0.28919504662664186, 0.01042452722969818, -0.41044508431139815, -0.17570105461490285, 0.01928872470343085, 0.23798647789278451) q5, q6, q7, q8, q9, q4;
+  multiplexed_rz_5(1.5897348104169056, 0.16713249723219525, -0.2216727227555653, -0.1731943404018815, 0.15681732362356196, 0.13416632070655785, -0.2037337390646278, -0.21666467990385352, 0.15532663440230257, -0.5624227414887795, -0.23782499359959833, 0.5155063260477136, 0.18829281092793995, 0.870494745304564, -0.19435465409762623, 0.49756734235677613, -0.2454866018297708, -0.19700821947608704, 0.8678411799261033, -0.554761133258607, 0.5181598914261745, 0.5052289505869486, 0.18063120269776747, 0.1579801997807634, -0.2140111145253927, 0.5393202051219191, 0.8772202648931048, 0.15947088900202272, -0.9162482845884284, -0.22432628813402605, 0.16447893185373444, 0.8466808662303585) q5, q6, q7, q8, q9, q4;
+}
+
+// fast_inverse: block-encoding of (w - A)^-1 by orbital rotation, 5-bit energy arithmetic and a flag rotation
+gate fast_inverse q0, q1, q2, q3, q4, q5, q6, q7, q8, q9 {
+  fast_inverse_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9;
+  fast_inverse_action q0, q1, q2, q3, q4, q5, q6, q7, q8, q9;
+  inv @ fast_inverse_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9;
+}
+
+// qsvt_compute: compute part of qsvt
+gate qsvt_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14 {
+  h q14;
+}
+
+// qsvt_phase: signal-projector-controlled phase e^{i theta/2 (2Pi - I)}, sign set by the QSVT qubit
+gate qsvt_phase(theta) q0, q1, q2, q3, q4, q5 {
+  negctrl(5) @ x q0, q1, q2, q3, q4, q5;
+  rz(theta) q5;
+  negctrl(5) @ x q0, q1, q2, q3, q4, q5;
+}
+
+// lcu_prepare: PREPARE of I - (w - b0 - A)^-1 B'
+gate lcu_prepare q0 {
+  ry(1.5393369102770091) q0;
+}
+
+// lcu_compute: compute part of lcu
+gate lcu_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13 {
+  lcu_prepare q4;
+}
+
+// identity: identity on 4 qubits
+gate identity q0, q1, q2, q3 {
+}
+
+// lcu_prepare_2: PREPARE of B' (two-body, identity moved into w)
+gate lcu_prepare_2 q0, q1, q2 {
+  ry(1.2309594173407745) q2;
+  ry(0.7853981633974483) q1;
+  cx q2, q1;
+  ry(0.7853981633974483) q1;
+  cx q2, q1;
+  ry(1.1780972450961724) q0;
+  cx q1, q0;
+  ry(0.39269908169872414) q0;
+  cx q2, q0;
+  ry(-0.39269908169872414) q0;
+  cx q1, q0;
+  ry(0.39269908169872414) q0;
+  cx q2, q0;
+}
+
+// lcu_compute_2: compute part of lcu
+gate lcu_compute_2 q0, q1, q2, q3, q4, q5, q6 {
+  lcu_prepare_2 q4, q5, q6;
+}
+
+// pauli_string: Pauli string Z0
+gate pauli_string q0, q1, q2, q3 {
+  z q0;
+}
+
+// pauli_string_2: Pauli string Z2
+gate pauli_string_2 q0, q1, q2, q3 {
+  z q2;
+}
+
+// pauli_string_3: Pauli string Z0 Z2
+gate pauli_string_3 q0, q1, q2, q3 {
+  z q0;
+  z q2;
+}
+
+// pauli_string_4: Pauli string Z1
+gate pauli_string_4 q0, q1, q2, q3 {
+  z q1;
+}
+
+// pauli_string_5: Pauli string Z3
+gate pauli_string_5 q0, q1, q2, q3 {
+  z q3;
+}
+
+// pauli_string_6: Pauli string Z1 Z3
+gate pauli_string_6 q0, q1, q2, q3 {
+  z q1;
+  z q3;
+}
+
+// lcu_action: action part of lcu
+gate lcu_action q0, q1, q2, q3, q4, q5, q6 {
+  negctrl(3) @ pauli_string q4, q5, q6, q0, q1, q2, q3;
+  negctrl(3) @ gphase(3.141592653589793) q4, q5, q6;
+  ctrl @ negctrl(2) @ pauli_string_2 q4, q5, q6, q0, q1, q2, q3;
+  ctrl @ negctrl(2) @ gphase(3.141592653589793) q4, q5, q6;
+  ctrl @ negctrl(2) @ pauli_string_3 q5, q4, q6, q0, q1, q2, q3;
+  ctrl(2) @ negctrl @ pauli_string_4 q4, q5, q6, q0, q1, q2, q3;
+  ctrl(2) @ negctrl @ gphase(3.141592653589793) q4, q5, q6;
+  ctrl @ negctrl(2) @ pauli_string_5 q6, q4, q5, q0, q1, q2, q3;
+  ctrl @ negctrl(2) @ gphase(3.141592653589793) q6, q4, q5;
+  ctrl(2) @ negctrl @ pauli_string_6 q4, q6, q5, q0, q1, q2, q3;
+}
+
+// product_c1n0: block-encoding of (w - b0 - A)^-1 B' (1 control and 0 negative-control qubits first, distributed to the body; compute parts stay uncontrolled)
+gate product_c1n0 c0, q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12 {
+  lcu_compute_2 q0, q1, q2, q3, q5, q6, q7;
+  ctrl @ lcu_action c0, q0, q1, q2, q3, q5, q6, q7;
+  inv @ lcu_compute_2 q0, q1, q2, q3, q5, q6, q7;
+  fast_inverse_compute q0, q1, q2, q3, q4, q8, q9, q10, q11, q12;
+  ctrl @ fast_inverse_action c0, q0, q1, q2, q3, q4, q8, q9, q10, q11, q12;
+  inv @ fast_inverse_compute q0, q1, q2, q3, q4, q8, q9, q10, q11, q12;
+}
+
+// lcu_action_2: action part of lcu
+gate lcu_action_2 q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13 {
+  negctrl @ identity q4, q0, q1, q2, q3;
+  product_c1n0 q4, q0, q1, q2, q3, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  ctrl @ gphase(3.141592653589793) q4;
+}
+
+// lcu: block-encoding of I - (w - b0 - A)^-1 B' by PREPARE/SELECT
+gate lcu q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13 {
+  lcu_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  lcu_action_2 q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  inv @ lcu_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+}
+
+// adjoint: block-encoding of (I - (w - b0 - A)^-1 B')†
+gate adjoint q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13 {
+  inv @ lcu q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+}
+
+// qsvt_step: one U, phase, U-dagger, phase step of the QSVT of (I - (w - b0 - A)^-1 B')†
+gate qsvt_step(theta_a, theta_b) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14 {
+  adjoint q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  qsvt_phase(theta_a) q4, q5, q6, q7, q8, q14;
+  inv @ adjoint q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  qsvt_phase(theta_b) q4, q5, q6, q7, q8, q14;
+}
+
+// qsvt_action: action part of qsvt
+gate qsvt_action q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14 {
+  qsvt_phase(-9.994028271620436e-9) q4, q5, q6, q7, q8, q14;
+  qsvt_step(-3.1415926385077753, -3.141592676106756) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141592620254356, -3.141592702593638) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415925820054276, -3.1415927575496396) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415925034532552, -3.141592869238662) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415923454928008, -3.1415930914455386) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415920345865582, -3.1415935241183637) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141591435698222, -3.1415943486123914) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415903067216537, -3.1415958861970266) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415882239046233, -3.14159869242348) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141584463319243, -3.1416037048848606) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415778180711498, -3.14161246757914) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415663251048818, -3.141627460847087) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415468700784026, -3.1416525704776848) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415146353973973, -3.1416937311564763) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1414623573595435, -3.141759775417773) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1413793662890916, -3.1418635066375424) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141250401615891, -3.142022990397773) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1410542247403987, -3.1422630206362028) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1407620975475843, -3.142616665140498) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1403362524357057, -3.143126731950664) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.13972854604896, -3.1438469307660797) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1388795548373887, -3.1448424421559875) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.137718423814478, -3.1461895657314036) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1361638064370827, -3.1479741101147574) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.13412622109664, -3.1502882223509716) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.131512092086681, -3.1532254339321395) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1282296438139516, -3.1568738156233427) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.124196690725912, -3.1613072658154677) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1193502312099586, -3.166575090061844) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1136576221149173, -3.1726901640246408) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.107128963098441, -3.179616148836702) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.0998300906879557, -3.1872545387811684) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.0918951570414888, -3.1954328914586956) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.0835370292091517, -3.2038965053242747) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.075052675953522, -3.2123069705041156) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.0668195690039806, -3.2202519665830445) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.2202519665830445, -3.0668195690039806) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.2123069705041156, -3.075052675953522) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.2038965053242747, -3.0835370292091517) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1954328914586956, -3.0918951570414888) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1872545387811684, -3.0998300906879557) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.179616148836702, -3.107128963098441) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1726901640246408, -3.1136576221149173) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.166575090061844, -3.1193502312099586) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1613072658154677, -3.124196690725912) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1568738156233427, -3.1282296438139516) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1532254339321395, -3.131512092086681) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1502882223509716, -3.13412622109664) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1479741101147574, -3.1361638064370827) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1461895657314036, -3.137718423814478) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1448424421559875, -3.1388795548373887) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1438469307660797, -3.13972854604896) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.143126731950664, -3.1403362524357057) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.142616665140498, -3.1407620975475843) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1422630206362028, -3.1410542247403987) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.142022990397773, -3.141250401615891) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1418635066375424, -3.1413793662890916) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141759775417773, -3.1414623573595435) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1416937311564763, -3.1415146353973973) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1416525704776848, -3.1415468700784026) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141627460847087, -3.1415663251048818) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.14161246757914, -3.1415778180711498) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1416037048848606, -3.141584463319243) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.14159869242348, -3.1415882239046233) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415958861970266, -3.1415903067216537) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415943486123914, -3.141591435698222) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415935241183637, -3.1415920345865582) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415930914455386, -3.1415923454928008) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141592869238662, -3.1415925034532552) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.1415927575496396, -3.1415925820054276) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141592702593638, -3.141592620254356) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_step(-3.141592676106756, -3.1415926385077753) q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  adjoint q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13;
+  qsvt_phase(3.141592643595765) q4, q5, q6, q7, q8, q14;
+}
+
+// qsvt: real-part QSVT of degree 145 of (I - (w - b0 - A)^-1 B')†
+gate qsvt q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14 {
+  qsvt_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  qsvt_action q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+  inv @ qsvt_compute q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14;
+}
+
+// product: block-encoding of (I - (w - b0 - A)^-1 B')^-1 · (w - A)^-1
+gate product q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14, q15 {
+  fast_inverse q0, q1, q2, q3, q10, q11, q12, q13, q14, q15;
+  qsvt q0, q1, q2, q3, q4, q5, q6, q7, q8, q11, q12, q13, q14, q15, q9;
+}
+
+// annihilation_0_compute: compute part of annihilation_0
+gate annihilation_0_compute q0, q1, q2, q3, q4 {
+  h q4;
+}
+
+// annihilation_0_action: action part of annihilation_0
+gate annihilation_0_action q0, q1, q2, q3, q4 {
+  x q0;
+  cz q4, q0;
+}
+
+// annihilation_0: Jordan–Wigner a_0
+gate annihilation_0 q0, q1, q2, q3, q4 {
+  annihilation_0_compute q0, q1, q2, q3, q4;
+  annihilation_0_action q0, q1, q2, q3, q4;
+  inv @ annihilation_0_compute q0, q1, q2, q3, q4;
+}
+
+// product_2: block-encoding of a_0 · R(w⁺) · a†_0
+gate product_2 q0, q1, q2, q3, q4, q5, q6, q7, q8, q9, q10, q11, q12, q13, q14, q15, q16, q17 {
+  creation_0 q0, q1, q2, q3, q12;
+  product q0, q1, q2, q3, q5, q6, q7, q8, q9, q10, q11, q13, q14, q15, q16, q17;
+  annihilation_0 q0, q1, q2, q3, q4;
+}
+
+qubit[4] system;
+qubit[1] ladder_0;
+qubit[1] lcu_index_0_1;
+qubit[4] lcu_work_0_0_1;
+qubit[1] qsvt_signal_0_1;
+qubit[1] flag_1_1;
+qubit[1] ladder_2;
+qubit[5] shared_clean;
+
+product_2 system[0], system[1], system[2], system[3], ladder_0[0], lcu_index_0_1[0], lcu_work_0_0_1[0], lcu_work_0_0_1[1], lcu_work_0_0_1[2], lcu_work_0_0_1[3], qsvt_signal_0_1[0], flag_1_1[0], ladder_2[0], shared_clean[0], shared_clean[1], shared_clean[2], shared_clean[3], shared_clean[4];
