@@ -13,6 +13,13 @@ export interface SimulationOptions {
   readonly memoryLimitBytes?: number;
   /** Merge runs of gates into dense or diagonal passes on a few qubits (default true; exact to rounding). */
   readonly fuse?: boolean;
+  /**
+   * Compile block calls once into replayable programs (default true). false is the reference path the benchmarks
+   * measure against: every run streams the lazily flattened gates and resolves each gate as it comes (native kernels
+   * still apply unless useNativeKernels is false), never fused, never split between threads, and no idle work qubit is
+   * left out of the state.
+   */
+  readonly compile?: boolean;
   /** Worker threads to split gate passes of large states over (see SimulatorPool); default: this thread only. */
   readonly pool?: SimulatorPool;
 }

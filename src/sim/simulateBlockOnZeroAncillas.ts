@@ -2,14 +2,18 @@
  * simulateBlockOnZeroAncillas: simulates one block on inputs whose chosen ("idle") qubits are |0>,
  * leaving out of the state every idle qubit that only native kernels use as a work qubit (such a
  * qubit is |0> again at the end, so the output is the reduced state ⊗ |0>). The block is compiled
- * once; `run` and `runBasis` replay it for as many inputs as the caller needs (columns, probes).
+ * once; `run` and `runBasis` replay it for as many inputs as the caller needs (columns, probes). With
+ * `compile: false` (the benchmarks' reference path) nothing is left out and every run streams the flat gates.
  */
-import type { Block } from '../circuit/types.js';
+import { call } from '../circuit/ops.js';
+import type { Block, Circuit } from '../circuit/types.js';
 import { InputError } from '../core/InputError.js';
 import { ensureFits } from '../core/memoryBudget.js';
 import type { SimulationOptions } from './SimulationOptions.js';
 import { MAX_QUBITS, StateVector, stateVectorBytes } from './StateVector.js';
+import { applyUnitaryStream } from './internal/applyFlatOps.js';
 import { compileCall, compileTarget } from './internal/compileProgram.js';
+import { flattenForSimulation } from './internal/flattenForSimulation.js';
 import { kernelLookup } from './internal/kernelLookup.js';
 import { makeProgram, type Program, type Step } from './internal/Program.js';
 import { runProgram } from './internal/runProgram.js';
@@ -52,9 +56,9 @@ export function prepareBlockOnZeroAncillas(block: Block, options: ZeroAncillaOpt
   if (idle.size !== options.idleZero.length || options.idleZero.some((q) => !Number.isInteger(q) || q < 0 || q >= block.qubits)) {
     throw new RangeError(`prepareBlockOnZeroAncillas: idle qubits ${JSON.stringify(options.idleZero)} are not distinct qubits of ${block.name}`);
   }
-  const kernels = kernelLookup(options);
-  const touched = touchedQubits(block, kernels);
+  const compiled = options.compile !== false;
   const locals = Array.from({ length: block.qubits }, (_, q) => q);
+  const touched = compiled ? touchedQubits(block, kernelLookup(options)) : new Set(locals);
   const elided = locals.filter((q) => idle.has(q) && !touched.has(q));
   const kept = locals.filter((q) => !elided.includes(q));
   const inputQubits = locals.filter((q) => !idle.has(q));
@@ -64,10 +68,22 @@ export function prepareBlockOnZeroAncillas(block: Block, options: ZeroAncillaOpt
   // Refuse an oversized state before compiling (patterns and tables are built for the state size).
   if (stateQubits > MAX_QUBITS) throw new InputError(`prepareBlockOnZeroAncillas: ${stateQubits} state qubits exceed the simulator's maximum of ${MAX_QUBITS}`);
   ensureFits(stateVectorBytes(stateQubits), `a ${stateQubits}-qubit state vector`, options.memoryLimitBytes);
-  const steps: Step[] = [];
   const args = options.args ?? [];
-  compileCall(block, args, { bits, controls: [], negControls: [], inverse: options.inverse ?? false, times: 1 }, compileTarget(stateQubits, options), steps);
-  const program: Program = makeProgram(steps, stateQubits);
+  const inverse = options.inverse ?? false;
+  let apply: (state: StateVector) => void;
+  let operations: number;
+  if (compiled) {
+    const steps: Step[] = [];
+    compileCall(block, args, { bits, controls: [], negControls: [], inverse, times: 1 }, compileTarget(stateQubits, options), steps);
+    const program: Program = makeProgram(steps, stateQubits);
+    apply = (state) => runProgram(program, state, options.pool);
+    operations = program.operations;
+  } else {
+    const circuit: Circuit = { qubitRegisters: [{ name: 'q', size: block.qubits, offset: 0 }], bitRegisters: [], ops: [call(block, locals, args, { inverse })] };
+    apply = (state) => applyUnitaryStream(state, flattenForSimulation(circuit, options), 'prepareBlockOnZeroAncillas', options);
+    operations = 0;
+    for (const _ of flattenForSimulation(circuit, options)) operations++;
+  }
   const inputPlace = Int32Array.from({ length: 2 ** inputQubits.length }, (_, u) => {
     let index = 0;
     inputQubits.forEach((q, k) => (index |= ((u >>> k) & 1) << bits[q]!));
@@ -89,7 +105,7 @@ export function prepareBlockOnZeroAncillas(block: Block, options: ZeroAncillaOpt
     elided,
     inputQubits,
     stateQubits,
-    operations: program.operations,
+    operations,
     run(inputRe, inputIm) {
       if (inputRe.length !== inputPlace.length || inputIm.length !== inputPlace.length) {
         throw new RangeError(`BlockOnZeroAncillas.run: expected ${inputPlace.length} input amplitudes`);
@@ -100,13 +116,13 @@ export function prepareBlockOnZeroAncillas(block: Block, options: ZeroAncillaOpt
         state.re[inputPlace[u]!] = inputRe[u]!;
         state.im[inputPlace[u]!] = inputIm[u]!;
       }
-      runProgram(program, state, options.pool);
+      apply(state);
       return state;
     },
     runBasis(index) {
       if (!Number.isInteger(index) || index < 0 || index >= inputPlace.length) throw new RangeError(`BlockOnZeroAncillas.runBasis: index ${index} out of range`);
       const state = StateVector.basis(stateQubits, inputPlace[index]!, sizeOptions);
-      runProgram(program, state, options.pool);
+      apply(state);
       return state;
     },
     stateIndex,

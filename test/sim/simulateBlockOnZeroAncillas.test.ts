@@ -1,6 +1,7 @@
 // simulateBlockOnZeroAncillas: leaving idle work qubits out of the state gives the full simulation's amplitudes
 // (and zeros wherever an elided qubit is 1) for fast inverses alone, in products and linear combinations, repeated
-// (powered) and controlled; qubits that a gate touches are kept.
+// (powered) and controlled; qubits that a gate touches are kept; the uncompiled reference path (compile: false) streams
+// the same amplitudes with nothing left out.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { ancillaQubits, type BlockEncoding } from '../../src/blocks/BlockEncoding.js';
@@ -99,5 +100,30 @@ describe('simulateBlockOnZeroAncillas(block, input, { idleZero })', () => {
     expect(kept).toContain(register[0]);
     expect(kept).not.toContain(register[1]);
     expect(prepareBlockOnZeroAncillas(inverse.block, { idleZero, useNativeKernels: false }).elided).toEqual([]);
+  });
+
+  it('with compile: false keeps every qubit and gives the compiled amplitudes (to 1e-12), native kernels on and off', () => {
+    fc.assert(
+      fc.property(hermitianArb(2), wArb, optionsArb, fc.boolean(), fc.boolean(), (T, w, o, useNativeKernels, inverse) => {
+        const encoding = productEncoding([inverseOf(T, w, o), adjointEncoding(inverseOf(T, { re: -w.re, im: w.im }, o))]);
+        const idleZero = Array.from({ length: ancillaQubits(encoding) }, (_, k) => encoding.systemQubits + k);
+        const compiled = prepareBlockOnZeroAncillas(encoding.block, { idleZero, inverse });
+        const streamed = prepareBlockOnZeroAncillas(encoding.block, { idleZero, inverse, compile: false, useNativeKernels });
+        expect(streamed.elided).toEqual([]);
+        expect(streamed.stateQubits).toBe(encoding.block.qubits);
+        expect(compiled.elided.length).toBeGreaterThan(0);
+        for (let column = 0; column < 2 ** encoding.systemQubits; column++) {
+          const a = compiled.runBasis(column);
+          const b = streamed.runBasis(column);
+          for (let i = 0; i < b.re.length; i++) {
+            const s = compiled.stateIndex(streamed.kept.reduce((index, q, k) => index | (((i >>> k) & 1) << q), 0));
+            const re = s < 0 ? 0 : a.re[s]!;
+            const im = s < 0 ? 0 : a.im[s]!;
+            expect(Math.hypot(re - b.re[i]!, im - b.im[i]!)).toBeLessThanOrEqual(1e-12);
+          }
+        }
+      }),
+      { numRuns: 12, seed: 43 },
+    );
   });
 });

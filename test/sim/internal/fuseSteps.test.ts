@@ -1,7 +1,7 @@
 // fuseSteps (through applyCircuit's fuse option): fused programs give the amplitudes of unfused ones to 1e-12 on
 // random hierarchical circuits (nested plain and conjugated blocks, controlled, inverted and powered calls, native
 // kernels on and off), on small states and on states large enough for the memory-weighted cost model and tiling, and
-// runs of gates really become 2×2, 4×4, diagonal and tiled passes.
+// runs of gates really become 2×2, 4×4, diagonal and tiled passes; the uncompiled reference path (compile: false) agrees.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { fourierConstantAdder } from '../../../src/arithmetic/fourierConstantAdder.js';
@@ -29,6 +29,10 @@ function fusedAndPlain(circuit: Circuit, useNativeKernels: boolean, qubits = qub
   const plain = randomState(qubits, 5);
   applyCircuit(fused, circuit, { useNativeKernels, fuse: true });
   applyCircuit(plain, circuit, { useNativeKernels, fuse: false });
+  // The uncompiled reference path (flat gates resolved one by one) must give the same amplitudes too.
+  const streamed = randomState(qubits, 5);
+  applyCircuit(streamed, circuit, { useNativeKernels, compile: false });
+  expectComplexArrayClose(streamed, plain, 1e-12, 'streamed against compiled unfused amplitudes');
   return [fused, plain];
 }
 
