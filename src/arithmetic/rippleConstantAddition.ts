@@ -1,5 +1,7 @@
 // rippleConstantAddition: register += constant (mod 2^width), optionally under one control qubit, by loading the constant
-// into a zeroed scratch register (CNOTs from the control, or X gates), a Cuccaro ripple-carry addition, and unloading.
+// into a zeroed scratch register (CNOTs from the control, or X gates), a Cuccaro ripple-carry addition, and unloading;
+// ripplePairAddition: the same under the AND of two controls, computed into one work qubit and uncomputed.
+import { defineConjugatedBlock } from '../circuit/defineBlock.js';
 import { call, gate } from '../circuit/ops.js';
 import type { GateOp, UnitaryOp } from '../circuit/types.js';
 import { cuccaroAdder } from './cuccaroAdder.js';
@@ -38,4 +40,32 @@ export function rippleConstantAddition(constant: number, qubits: RippleAdditionQ
   }
   const adder = call(cuccaroAdder(width), [...qubits.scratch.slice(0, width), ...qubits.register, qubits.carry]);
   return [...loads, adder, ...loads];
+}
+
+/**
+ * Ops for register ← register + constant·a·b mod 2^width: one call of a conjugated block `ripple_pair_addition_<width>` on
+ * [a, b, and, register, scratch (width), carry] whose compute is ccx(a, b, and) and whose action is rippleConstantAddition
+ * controlled by `and` — so a controlled call controls only the addition, and `and` (a work qubit) returns to |0>; on
+ * and = 1 at the input it adds constant·(1 ⊕ ab). Returns [] for a constant ≡ 0.
+ * @throws RangeError as rippleConstantAddition.
+ */
+export function ripplePairAddition(constant: number, qubits: Omit<RippleAdditionQubits, 'control'> & { readonly pair: readonly [number, number]; readonly and: number }): UnitaryOp[] {
+  const width = qubits.register.length;
+  const local = (start: number, size: number): number[] => Array.from({ length: size }, (_, k) => start + k);
+  const register = local(3, width);
+  const scratch = local(3 + width, width);
+  const carry = 3 + 2 * width;
+  const addition = rippleConstantAddition(constant, { register, scratch, carry, control: 2 });
+  if (addition.length === 0) return [];
+  const block = defineConjugatedBlock(
+    {
+      name: `ripple_pair_addition_${width}`,
+      role: `add a constant modulo 2^${width} under the AND of two controls, computed into a work qubit (Cuccaro adder)`,
+      qubits: carry + 1,
+      workQubits: [2],
+    },
+    [gate('ccx', [0, 1, 2])],
+    addition,
+  );
+  return [call(block, [...qubits.pair, qubits.and, ...qubits.register, ...qubits.scratch.slice(0, width), qubits.carry])];
 }

@@ -5,7 +5,9 @@
  */
 import type { Block, UnitaryOp } from '../circuit/types.js';
 import type { CostOverride, OverrideTable } from './CostOverride.js';
+import type { MultiControlMethod } from './decompositionTable.js';
 import { gidneyAdder } from './overrides/gidneyAdder.js';
+import { temporaryAnd } from './overrides/temporaryAnd.js';
 import { unaryIterationSelect } from './overrides/unaryIterationSelect.js';
 
 export type OverrideRule = (block: Block) => CostOverride | null;
@@ -15,12 +17,19 @@ export interface OverrideRuleOptions {
   readonly unaryIteration?: boolean;
   /** Cost ripple-carry adders by Gidney's logical-AND adder (default false: Cuccaro's simulated form). */
   readonly gidneyAdder?: boolean;
+  /**
+   * The decomposition table's multi-control mode (default 'measured'): in 'measured' mode a block holding the AND of two
+   * controls in a work qubit around its action (adder pair terms) is costed as a temporary logical-AND erased by
+   * measurement (1 Toffoli); otherwise its two ccx count as simulated (2 Toffolis).
+   */
+  readonly multiControl?: MultiControlMethod;
 }
 
 export function defaultOverrideRules(options: OverrideRuleOptions = {}): OverrideRule[] {
   const rules: OverrideRule[] = [];
   if (options.unaryIteration ?? true) rules.push(unaryIterationSelect);
   if (options.gidneyAdder ?? false) rules.push(gidneyAdder);
+  if ((options.multiControl ?? 'measured') === 'measured') rules.push(temporaryAnd);
   return rules;
 }
 

@@ -6,7 +6,7 @@
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
 import type { OverrideRuleOptions } from './collectOverrides.js';
-import { routeBuilder, type RouteName } from './costRoutes.js';
+import { routeBuilder, type RouteName, type RouteSettings } from './costRoutes.js';
 import type { DecompositionOptions } from './decompositionTable.js';
 import { DEFAULT_SHARES } from './errorBudget.js';
 import { greenCost, type GreenCost, type UnavailableRoute } from './greenCost.js';
@@ -22,6 +22,10 @@ export interface CompareOptions extends DecompositionOptions, OverrideRuleOption
   readonly energy?: number;
   readonly prepToffoli?: number;
   readonly toffoliT?: 4 | 7;
+  /** B' of the preconditioned route (default 'cheaper'). */
+  readonly bEncoding?: RouteSettings['bEncoding'];
+  /** The preconditioned route's electron-number window (default true); false: the whole Fock space. */
+  readonly window?: boolean;
 }
 
 export interface RouteComparison {
@@ -36,8 +40,15 @@ export const ROUTES: readonly RouteName[] = ['preconditioned', 'direct'];
 export function compareRoutes(model: FermionModel, options: CompareOptions): RouteComparison {
   const given = options.energy !== undefined;
   const groundEnergy = options.energy ?? groundEnergyBound(model);
+  const settings: RouteSettings = {
+    bEncoding: options.bEncoding ?? 'cheaper',
+    window: options.window ?? true,
+    ...(options.multiControl ? { multiControl: options.multiControl } : {}),
+    ...(options.unaryIteration !== undefined ? { unaryIteration: options.unaryIteration } : {}),
+    ...(options.gidneyAdder !== undefined ? { gidneyAdder: options.gidneyAdder } : {}),
+  };
   const cost = (route: RouteName): GreenCost | UnavailableRoute =>
-    greenCost({ ...options, model, groundEnergy, build: routeBuilder(model, route) });
+    greenCost({ ...options, model, groundEnergy, build: routeBuilder(model, route, settings) });
   const routes = { preconditioned: cost('preconditioned'), direct: cost('direct') };
   const toffoliT = options.toffoliT ?? 4;
   const assumptions = [
@@ -52,7 +63,8 @@ export function compareRoutes(model: FermionModel, options: CompareOptions): Rou
     `Toffoli = ${toffoliT} T (${toffoliT === 4 ? 'measurement-based uncomputation, Jones 2013 / Gidney 2018' : 'Amy et al. 2013'}); multi-controlled gates: ${options.multiControl ?? 'measured'} ladder (src/cost/decompositionTable.ts).`,
     'SELECT of every LCU costed by unary iteration (Babbush et al. 2018), L - 1 Toffolis; PREPARE as simulated (uniformly controlled rotations).',
     `Shots: plain sampling ceil(alpha^2/eps_s^2) per test (one standard error); amplitude estimation 2M + 1 controlled-U calls with M from ${AMPLITUDE_ESTIMATION_SOURCE} (success probability 8/pi^2).`,
-    "Circuits are the resolvent stage's own (src/resolvent/resolventCost.ts): the real QSVT sequence with placeholder phases (counted as arbitrary rotations), its degree the Childs-Kothari-Somma truncation bound (an upper bound on the built degree), times the fast inverse on the preconditioned route; K and delta from ||(w - H)^-1|| <= 1/eta and ||B'|| <= Pauli 1-norm of B' = B - b0 I (B's identity part moved into w); the fast inverse's flag rotation pruned to dyadic intervals (O(log ||A||) rotations).",
+    "Circuits are the resolvent stage's own (src/resolvent/resolventCost.ts): the real QSVT sequence with placeholder phases (counted as arbitrary rotations), its degree the Childs-Kothari-Somma truncation bound (an upper bound on the built degree), times the fast inverse on the preconditioned route; K and delta from ||(w - H)^-1|| <= 1/eta and ||B'|| <= alpha_B' of B' = B - b0 I (b0 moved into w: B's identity coefficient for the Pauli LCU, the centre of its range for the arithmetic encoding); the fast inverse's flag rotation pruned to dyadic intervals (O(log ||A||) rotations).",
+    `Preconditioned route: ${settings.window ? 'the fast inverse and B\' act on the electron window of each part (N + 1 particle, N - 1 hole; an electron counter and a window qubit)' : 'the whole Fock space (no electron window, --whole-fock)'}; B' = ${settings.bEncoding === 'cheaper' ? 'whichever of the Pauli LCU and the arithmetic encoding (B diagonal: controlled constant additions and a signed flag rotation, alpha = beta >= max|B - b0| on the window) gives fewer Toffolis per application' : settings.bEncoding === 'arithmetic' ? 'the arithmetic encoding when B is diagonal (else the Pauli LCU)' : 'the Pauli LCU'}.`,
   ];
   return { routes, groundEnergy, groundEnergySource: given ? 'given' : 'lower bound', assumptions };
 }

@@ -9,6 +9,7 @@ import { ancillaQubits, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import { ladderEncoding } from '../blocks/builders/ladderEncoding.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
+import type { BEncodingReport } from '../resolvent/ResolventReport.js';
 import { collectOverrides, defaultOverrideRules, type OverrideRuleOptions } from './collectOverrides.js';
 import type { DecompositionOptions } from './decompositionTable.js';
 import { errorBudget, type ErrorBudget } from './errorBudget.js';
@@ -37,6 +38,8 @@ export interface BuiltResolvent {
   readonly precisionMet: boolean;
   /** Further facts the route states (δ, κ, bounds used), printed under the table. */
   readonly notes: readonly string[];
+  /** Preconditioned route: which encoding B' got and both α's. */
+  readonly bEncoding?: BEncodingReport;
 }
 
 export type ResolventBuilder = (w: ComplexScalar, options: { readonly precision: number; readonly electrons: number }) => RouteResolvent;
@@ -72,6 +75,8 @@ export interface PartCost {
   readonly plainShotsPerTest: number;
   readonly amplitudeEstimationCallsPerTest: number;
   readonly notes: readonly string[];
+  /** As BuiltResolvent.bEncoding (preconditioned route). */
+  readonly bEncoding?: BEncodingReport;
 }
 
 export interface GreenCost {
@@ -95,6 +100,8 @@ export interface GreenCost {
   readonly totalToffoli: number;
   readonly totalToffoliAmplitudeEstimation: number;
   readonly prepToffoli: number | null;
+  /** Preconditioned route: B's encoding in the costlier test circuit (the part whose per-run figures are shown). */
+  readonly bEncoding?: BEncodingReport;
 }
 
 function partCost(part: 'particle' | 'hole', w: ComplexScalar, electrons: number, budget: ErrorBudget, options: GreenCostOptions): PartCost | UnavailableRoute {
@@ -131,6 +138,7 @@ function partCost(part: 'particle' | 'hole', w: ComplexScalar, electrons: number
     plainShotsPerTest: shots.plainShots,
     amplitudeEstimationCallsPerTest: shots.amplitudeEstimationCalls,
     notes: resolvent.notes,
+    ...(resolvent.bEncoding ? { bEncoding: resolvent.bEncoding } : {}),
   };
 }
 
@@ -178,5 +186,6 @@ export function greenCost(options: GreenCostOptions): GreenCost | UnavailableRou
     totalToffoli,
     totalToffoliAmplitudeEstimation: totalToffoliAe,
     prepToffoli: options.prepToffoli ?? null,
+    ...(worst.bEncoding ? { bEncoding: worst.bEncoding } : {}),
   };
 }

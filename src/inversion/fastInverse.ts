@@ -3,7 +3,7 @@
  * orbital rotation to the eigenbasis, reversible arithmetic for E = Σ ε_k n_k, a flag rotation by f(E) = c/(w − E), uncompute.
  */
 import { defineConjugatedBlock } from '../circuit/defineBlock.js';
-import { call, gate } from '../circuit/ops.js';
+import { call } from '../circuit/ops.js';
 import type { UnitaryOp } from '../circuit/types.js';
 import { memoiseMatrix, type AncillaRegister, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
@@ -12,6 +12,7 @@ import { oneBodyRotation, type OneBodyRotationOptions } from '../rotations/oneBo
 import { blockCounts, totalGates } from '../circuit/gateCounts.js';
 import { energyGrid, type Window } from './internal/energyGrid.js';
 import { weightedSumOps } from './internal/energyArithmetic.js';
+import { electronWindowOps } from './internal/electronWindowOps.js';
 import { exactInverse } from './internal/exactInverse.js';
 import { flagRotationOps } from './internal/flagRotationOps.js';
 
@@ -171,14 +172,7 @@ export function fastInverse(T: ComplexMatrix, w: ComplexScalar, options: FastInv
   const carry = adder === 'ripple' ? next++ : -1;
   const compute: UnitaryOp[] = [call(rotation.block, system)];
   compute.push(...weightedSumOps(adder, grid.weights, -grid.sumMin, { system, register, scratch, carry }));
-  if (window) {
-    compute.push(...weightedSumOps(adder, system.map(() => 1), 0, { system, register: counter, scratch, carry }));
-    for (let N = window.min; N <= window.max; N++) {
-      const controls = counter.filter((_, b) => Math.floor(N / 2 ** b) % 2 === 1);
-      const negControls = counter.filter((_, b) => Math.floor(N / 2 ** b) % 2 === 0);
-      compute.push(gate('x', [windowQubit!], [], { controls, negControls }));
-    }
-  }
+  if (window) compute.push(...electronWindowOps(adder, window, { system, counter, windowQubit: windowQubit!, scratch, carry }));
   const minEnergy = grid.modeOffset * sector.min + grid.step * grid.sumMin;
   const energies = grid.values;
   const mode = options.flagRotation ?? (grid.commensurate && m <= MAX_MULTIPLEXED_BITS ? 'multiplexed' : 'pruned');

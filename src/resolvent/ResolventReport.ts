@@ -6,6 +6,19 @@ import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 
 export type ResolventRoute = 'preconditioned' | 'direct';
 
+/** How the preconditioned route block-encoded B' = B − b₀I, and what each encoding's α is. */
+export interface BEncodingReport {
+  readonly used: 'pauli' | 'arithmetic';
+  /** α of the Pauli LCU of B' (b₀ = B's identity coefficient). */
+  readonly alphaPauli: number;
+  /** α = β of the arithmetic encoding on the route's window (b₀ = the centre of B's range); null when B is not diagonal. */
+  readonly alphaArithmetic: number | null;
+  /** Why B is not diagonal in the occupation basis (only the Pauli LCU applies). */
+  readonly notDiagonal?: string;
+  /** resolventCost's 'cheaper' choice: Toffolis of one application of the route with each encoding (null: not available). */
+  readonly toffoli?: { readonly pauli: number | null; readonly arithmetic: number | null };
+}
+
 export interface ResolventReport {
   readonly route: ResolventRoute;
   readonly w: ComplexScalar;
@@ -27,7 +40,9 @@ export interface ResolventReport {
   readonly bShift: number;
   /** Bound on ‖M‖. */
   readonly normBoundM: number;
-  /** The bound used for ‖B'‖ = ‖B − b₀I‖ (preconditioned route): its Pauli 1-norm α_B'. */
+  /** Preconditioned route: B's encoding (Pauli LCU or arithmetic) and both α's; null on the direct route. */
+  readonly bEncoding: BEncodingReport | null;
+  /** The bound used for ‖B'‖ = ‖B − b₀I‖ (preconditioned route): α_B' of the encoding used. */
   readonly normBoundB: number | null;
   readonly alphas: {
     readonly fastInverse: number | null;

@@ -12,6 +12,11 @@
  * B's identity part is moved into the shift first (B = b₀I + B', w − H = (w − b₀) − A − B'; Babbush et al., Phys. Rev. X 8,
  * 041015, 2018, drop the identity term of an LCU the same way): F is the fast inverse at w − b₀ and M = I − F·B', which
  * lowers α_B, hence K and α_M, by |b₀|; `B` below is B'.
+ * B' is the Pauli LCU (α_B' = its 1-norm) or, with `bEncoding: 'arithmetic'` and a B diagonal in the occupation basis,
+ * diagonalEncoding (α_B' = β ≥ max|B(x) − b₀| on the window, b₀ then the centre of B's range, not its identity
+ * coefficient); K = 1 + α_B'/|Im w| holds for both since α_B' ≥ ‖B'‖ (on the window: with a window both F and B' are
+ * P … P, and M = I outside it). The arithmetic B' has its own error e_B (its coefficients' rounding); it enters M's error
+ * as F's does, so it gets the same precision (ε/2)/(1 + 2 K α_B/|Im w|) and M's measured error is what is propagated.
  * Direct: M = w − H as directShift builds it (α = |w| + α_H, exact), K = 1/|Im w|, all of ε (99 %) for the polynomial.
  * When the fast inverse, at its register cap, leaves nothing of ε for the polynomial, the plan throws — or, with
  * `reachablePrecision`, plans for the smallest precision it allows instead, 2(e_F + (1 + e_F) e_M α_M K) (half for the
@@ -26,6 +31,8 @@ import { productEncoding } from '../blocks/combine/productEncoding.js';
 import { shiftedEncoding } from '../blocks/combine/shiftedEncoding.js';
 import { pauliLcu } from '../blocks/builders/pauliLcu.js';
 import { fastInverse, type FastInverseEncoding, type FastInverseOptions } from '../inversion/fastInverse.js';
+import { diagonalBound } from '../inversion/diagonalBound.js';
+import { diagonalEncoding } from '../inversion/diagonalEncoding.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
 import { jordanWigner } from '../operators/jordanWigner.js';
@@ -33,7 +40,7 @@ import { modelHamiltonian } from '../operators/modelHamiltonian.js';
 import { simplifyPauli } from '../operators/simplifyPauli.js';
 import { inverseDelta } from '../qsvt/qsvtInverse.js';
 import { oneBodyA } from './internal/oneBodyA.js';
-import type { ResolventRoute } from './ResolventReport.js';
+import type { BEncodingReport, ResolventRoute } from './ResolventReport.js';
 import { UnreachablePrecisionError } from './UnreachablePrecisionError.js';
 
 export interface ResolventOptions {
@@ -47,7 +54,12 @@ export interface ResolventOptions {
    * route, which always encodes the whole Fock space.
    */
   readonly electrons?: number | readonly [number, number];
-  /** Passed to fastInverse (precision, window and label are set here). */
+  /**
+   * Preconditioned route: how B' is block-encoded — 'pauli' (default: the Pauli LCU) or 'arithmetic' (diagonalEncoding,
+   * when B is diagonal in the occupation basis; otherwise the Pauli LCU, and the report says why).
+   */
+  readonly bEncoding?: 'pauli' | 'arithmetic';
+  /** Passed to fastInverse (precision, window and label are set here); its adder is the arithmetic B's too. */
   readonly fastInverse?: Omit<FastInverseOptions, 'precision' | 'electrons' | 'label'>;
   /** sup |p| of the inverse polynomial (default 0.5). */
   readonly supTarget?: number;
@@ -87,6 +99,8 @@ export interface ResolventPlan {
   /** Target for max |p(x) − s/x| on [δ, 1]. */
   readonly polynomialError: number;
   readonly window: { readonly min: number; readonly max: number } | null;
+  /** Preconditioned route: which encoding B' got and both α's; null on the direct route. */
+  readonly bEncoding: BEncodingReport | null;
 }
 
 const POLYNOMIAL_SHARE = 0.99;
@@ -162,17 +176,32 @@ export function planResolvent(model: FermionModel, w: ComplexScalar, options: Re
     const { K, source, aPriori } = conditionOf(1 / eta, options, caller, true);
     return {
       shift: 0, conditionSource: source, aPrioriConditionBound: aPriori, M, F: null, B: null, H: M, conditionBound: K, normBoundM: M.alpha, delta: inverseDelta(M.alpha, K, M.errorBound), precision: epsilon,
-      split: { polynomial: epsilon, quantisation: 0 }, polynomialError: POLYNOMIAL_SHARE * epsilon, window: null,
+      split: { polynomial: epsilon, quantisation: 0 }, polynomialError: POLYNOMIAL_SHARE * epsilon, window: null, bEncoding: null,
     };
   }
   if (options.route !== 'preconditioned') throw new RangeError(`${caller}: unknown route "${String(options.route)}"`);
-  const { encoding: B, shift } = shiftedBOf(model);
+  const pauli = shiftedBOf(model);
   const window = windowOf(options.electrons, model.modes);
-  const { K, source, aPriori } = conditionOf(1 + B.alpha / eta, options, caller, window !== null);
+  const windowRange = window ? ([window.min, window.max] as const) : undefined;
+  const diagonal = diagonalBound(model, windowRange);
+  const arithmetic = options.bEncoding === 'arithmetic' && !('notDiagonal' in diagonal) && diagonal.beta > 0;
+  const alphaB = arithmetic ? diagonal.beta : pauli.encoding.alpha;
+  const { K, source, aPriori } = conditionOf(1 + alphaB / eta, options, caller, window !== null);
   const quantisation = epsilon / 2;
+  const factorPrecision = quantisation / (1 + (2 * K * alphaB) / eta);
+  const built = arithmetic
+    ? diagonalEncoding(model, { precision: factorPrecision, ...(windowRange ? { electrons: windowRange } : {}), ...(options.fastInverse?.adder ? { adder: options.fastInverse.adder } : {}), label: "B' (diagonal, arithmetic; b0 moved into w)" })
+    : null;
+  const { encoding: B, shift } = built && !('notDiagonal' in built) ? { encoding: built, shift: built.shift } : pauli;
+  const bEncoding: BEncodingReport = {
+    used: B === pauli.encoding ? 'pauli' : 'arithmetic',
+    alphaPauli: pauli.encoding.alpha,
+    alphaArithmetic: 'notDiagonal' in diagonal ? null : diagonal.beta,
+    ...('notDiagonal' in diagonal ? { notDiagonal: diagonal.notDiagonal } : {}),
+  };
   const F = fastInverse(oneBodyA(model), { re: w.re - shift, im: w.im }, {
     ...options.fastInverse,
-    precision: quantisation / (1 + (2 * K * B.alpha) / eta),
+    precision: factorPrecision,
     ...(window ? { electrons: [window.min, window.max] as const } : {}),
     label: '(w - A)^-1',
   });
@@ -200,6 +229,6 @@ export function planResolvent(model: FermionModel, w: ComplexScalar, options: Re
   const quantisationShare = planned === epsilon ? quantisation : planned / 2;
   return {
     shift, conditionSource: source, aPrioriConditionBound: aPriori, M, F, B, H: null, conditionBound: K, normBoundM: 1 + B.alpha / eta, delta: inverseDelta(M.alpha, K, M.errorBound), precision: planned,
-    split: { polynomial: planned - quantisationShare, quantisation: quantisationShare }, polynomialError: Math.min(share(planned), 0.5), window,
+    split: { polynomial: planned - quantisationShare, quantisation: quantisationShare }, polynomialError: Math.min(share(planned), 0.5), window, bEncoding,
   };
 }

@@ -6,6 +6,9 @@
  * α of the inverse is 1/(s α_M) with s ≈ supTarget·δ; the error bound is the plan's rigorous one with s < δ. The
  * encoding is the built route's circuit — qsvtInverseStructure of M (the real QSVT sequence with placeholder phases),
  * times F on the preconditioned route, exactly as resolventEncoding composes it — for counting only: exact() throws.
+ * `bEncoding: 'cheaper'` costs the preconditioned route with B' as the Pauli LCU and as the arithmetic encoding (when B is
+ * diagonal) and keeps the one whose whole circuit has fewer Toffolis per application, counted by the caller's `countToffoli`
+ * (the cost stage's counter; this stage does not count); a route that cannot be planned one way is costed the other way.
  */
 import { ancillaQubits, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import { productEncoding } from '../blocks/combine/productEncoding.js';
@@ -18,14 +21,45 @@ import { planResolvent, type ResolventOptions } from './planResolvent.js';
 import type { ResolventReport } from './ResolventReport.js';
 import { UnreachablePrecisionError } from './UnreachablePrecisionError.js';
 
+export interface ResolventCostOptions extends Omit<ResolventOptions, 'bEncoding'> {
+  /** As ResolventOptions, or 'cheaper' (preconditioned route; needs countToffoli). Default 'pauli'. */
+  readonly bEncoding?: 'pauli' | 'arithmetic' | 'cheaper';
+  /** Toffolis of one application of an encoding (for 'cheaper'). */
+  readonly countToffoli?: (encoding: BlockEncoding) => number;
+}
+
 export interface ResolventCost {
   readonly report: ResolventReport;
   /** The route's circuit with placeholder phases, α = report.alphas.total, errorBound = report.errorBound. */
   readonly encoding: BlockEncoding;
 }
 
-/** @throws as planResolvent (RangeError, UnreachablePrecisionError); the degree cap does not apply. */
-export function resolventCost(model: FermionModel, w: ComplexScalar, options: ResolventOptions): ResolventCost {
+/**
+ * @throws as planResolvent (RangeError, UnreachablePrecisionError; with 'cheaper', the Pauli route's error when neither
+ *   way can be planned); RangeError for 'cheaper' without countToffoli. The degree cap does not apply.
+ */
+export function resolventCost(model: FermionModel, w: ComplexScalar, options: ResolventCostOptions): ResolventCost {
+  const { bEncoding, countToffoli, ...rest } = options;
+  if (bEncoding !== 'cheaper' || options.route !== 'preconditioned') return costWith(model, w, { ...rest, ...(bEncoding === 'arithmetic' ? { bEncoding } : {}) });
+  if (!countToffoli) throw new RangeError("resolventCost: bEncoding 'cheaper' needs countToffoli");
+  const attempt = (choice: 'pauli' | 'arithmetic'): ResolventCost | UnreachablePrecisionError => {
+    try {
+      return costWith(model, w, { ...rest, bEncoding: choice });
+    } catch (error) {
+      if (error instanceof UnreachablePrecisionError) return error;
+      throw error;
+    }
+  };
+  const pauli = attempt('pauli');
+  const arithmetic = pauli instanceof UnreachablePrecisionError || (pauli.report.bEncoding?.alphaArithmetic ?? null) !== null ? attempt('arithmetic') : null;
+  const usable = (c: ResolventCost | UnreachablePrecisionError | null): c is ResolventCost => c !== null && !(c instanceof UnreachablePrecisionError);
+  const toffoli = { pauli: usable(pauli) ? countToffoli(pauli.encoding) : null, arithmetic: usable(arithmetic) && arithmetic.report.bEncoding?.used === 'arithmetic' ? countToffoli(arithmetic.encoding) : null };
+  const pick = toffoli.arithmetic !== null && (toffoli.pauli === null || toffoli.arithmetic < toffoli.pauli) ? arithmetic : pauli;
+  if (!usable(pick)) throw pauli;
+  return { ...pick, report: { ...pick.report, bEncoding: { ...pick.report.bEncoding!, toffoli } } };
+}
+
+function costWith(model: FermionModel, w: ComplexScalar, options: ResolventOptions): ResolventCost {
   const plan = planResolvent(model, w, options, 'resolventCost');
   const { M, F } = plan;
   const K = plan.conditionBound;
@@ -52,6 +86,7 @@ export function resolventCost(model: FermionModel, w: ComplexScalar, options: Re
     conditionSource: plan.conditionSource,
     aPrioriConditionBound: plan.aPrioriConditionBound,
     bShift: plan.shift,
+    bEncoding: plan.bEncoding,
     normBoundM: plan.normBoundM,
     normBoundB: plan.B?.alpha ?? null,
     alphas: { fastInverse: F?.alpha ?? null, B: plan.B?.alpha ?? null, M: M.alpha, inverse: alphaInverse, total },

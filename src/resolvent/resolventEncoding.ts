@@ -48,6 +48,7 @@ export function resolventEncoding(model: FermionModel, w: ComplexScalar, options
     conditionSource: plan.conditionSource,
     aPrioriConditionBound: plan.aPrioriConditionBound,
     bShift: plan.shift,
+    bEncoding: plan.bEncoding,
     normBoundM: plan.normBoundM,
     normBoundB: plan.B?.alpha ?? null,
     alphas: { fastInverse: plan.F?.alpha ?? null, B: plan.B?.alpha ?? null, M: plan.M.alpha, inverse: inverse.alpha, total: whole.alpha },

@@ -1,6 +1,7 @@
 /**
  * checkModelBlocks: builds every block-encoding the pipeline uses for a model — ladder operators, H, A, B, the orbital
- * rotation of A and its inverse, the Slater-determinant preparation — and verifies each by simulation against a
+ * rotation of A and its inverse, the Slater-determinant preparation, and (B diagonal in the occupation basis) the
+ * arithmetic encoding of B − b₀ — and verifies each by simulation against a
  * reference built independently of the circuit (fockOperatorMatrix from the model's fermion terms; the Gaussian unitary
  * of the decomposition's V), skipping with a stated reason what is too large to simulate or to form.
  */
@@ -18,9 +19,13 @@ import { blockCounts, countsToObject, totalGates } from '../circuit/gateCounts.j
 import { MAX_QUBITS, StateVector } from '../sim/StateVector.js';
 import { applyUnitaryOps } from '../sim/applyUnitaryOps.js';
 import { adjointMatrix } from '../linalg/adjointMatrix.js';
+import { diagonalCheckItem } from './diagonalCheckItem.js';
 import { encodingCheck, judge, skippedRow, type CheckRow, type CheckThresholds } from './encodingCheck.js';
-import { onZeroAncillas, type ReferenceOperator } from './verifyEncoding.js';
-import { applyFockOperator, adjointFockTerms, modelFockTerms, type FockTerm } from './internal/fockOperatorMatrix.js';
+import type { SimulationOptions } from '../sim/SimulationOptions.js';
+import { onZeroAncillas } from './verifyEncoding.js';
+import { applyFockOperator, modelFockTerms, type FockTerm } from './internal/fockOperatorMatrix.js';
+import type { CheckItem } from './CheckItem.js';
+import { fockReference } from './fockReference.js';
 import { gaussianUnitaryMatrix, minor } from './internal/gaussianUnitaryMatrix.js';
 import { unitaryEncoding } from './unitaryEncoding.js';
 
@@ -37,15 +42,6 @@ export const MAX_GAUSSIAN_MODES = 10;
 /** Widest system whose dense reference an encoding's own exact() may form. */
 export const MAX_EXACT_SYSTEM_QUBITS = 12;
 
-/** An encoding to check, with an optional independent reference and an optional set of system columns. */
-export interface CheckItem {
-  readonly encoding: BlockEncoding;
-  /** The reference to compare with (default: the encoding's exact()). */
-  readonly reference?: () => ReferenceOperator;
-  /** Check exactly these system basis columns (verifyEncoding's `columns`). */
-  readonly columns?: readonly number[];
-}
-
 export interface CheckModelOptions {
   /** Pass/fail threshold on the error of exact constructions (default 1e-10). */
   readonly tolerance?: number;
@@ -55,21 +51,14 @@ export interface CheckModelOptions {
   readonly extra?: readonly (BlockEncoding | CheckItem)[];
   /** Rows estimated to cost more amplitude updates than this are skipped (default MAX_SIMULATION_WORK). */
   readonly maxSimulationWork?: number;
+  /** How every row is simulated (default: the simulator's defaults; the benchmarks pass the reference path). */
+  readonly simulation?: SimulationOptions;
 }
 
-/** What a row is judged against and how much simulation it may cost. */
+/** What a row is judged against, how much simulation it may cost and how it is simulated. */
 export interface CheckLimits extends CheckThresholds {
   readonly maxSimulationWork?: number;
-}
-
-/** A sum of fermion terms as a reference operator on modes qubits (never formed densely). */
-export function fockReference(terms: readonly FockTerm[], modes: number): ReferenceOperator {
-  const adjoint = adjointFockTerms(terms);
-  return {
-    dimension: 2 ** modes,
-    apply: (re, im) => applyFockOperator(terms, modes, re, im),
-    applyAdjoint: (re, im) => applyFockOperator(adjoint, modes, re, im),
-  };
+  readonly simulation?: SimulationOptions;
 }
 
 /** The row for an item: skipped when too wide or too costly to simulate or when its reference cannot be formed, else verified. */
@@ -77,7 +66,8 @@ export function checkItem(item: CheckItem, thresholds: CheckLimits): CheckRow {
   const { encoding } = item;
   const width = encoding.systemQubits + ancillaQubits(encoding);
   // The simulator leaves idle work qubits out of the state, so the limits apply to the qubits it keeps.
-  const stateQubits = width > MAX_QUBITS ? width : onZeroAncillas(encoding, {}).stateQubits;
+  const simulation = thresholds.simulation ?? {};
+  const stateQubits = width > MAX_QUBITS ? width : onZeroAncillas(encoding, simulation).stateQubits;
   if (stateQubits > MAX_SIMULATED_QUBITS) {
     return skippedRow(encoding, `${stateQubits} simulated qubits (of ${width}) exceed the simulation limit of ${MAX_SIMULATED_QUBITS}`);
   }
@@ -89,6 +79,7 @@ export function checkItem(item: CheckItem, thresholds: CheckLimits): CheckRow {
   const limit = thresholds.maxSimulationWork ?? MAX_SIMULATION_WORK;
   if (work > limit) return skippedRow(encoding, `simulation work ${work.toExponential(1)} amplitude updates exceeds the limit ${limit.toExponential(1)}`);
   return encodingCheck(encoding, { tolerance: thresholds.tolerance, precision: thresholds.precision }, {
+    ...simulation,
     ...(item.reference ? { reference: item.reference() } : {}),
     ...(item.columns ? { columns: item.columns } : {}),
   });
@@ -153,7 +144,7 @@ function orbitalRows(T: ComplexMatrix, rotation: OneBodyRotation, thresholds: Ch
   });
 }
 
-function slaterRow(model: FermionModel, TA: ComplexMatrix, rotation: OneBodyRotation, thresholds: CheckThresholds): CheckRow {
+function slaterRow(model: FermionModel, TA: ComplexMatrix, rotation: OneBodyRotation, thresholds: CheckLimits): CheckRow {
   const n = model.modes;
   const block = slaterDeterminant({ oneBody: TA }, model.electrons);
   const base = {
@@ -171,7 +162,7 @@ function slaterRow(model: FermionModel, TA: ComplexMatrix, rotation: OneBodyRota
   }
   const occupied = [...rotation.sortedOrder.subarray(0, model.electrons)].sort((a, b) => a - b);
   const state = StateVector.zero(n);
-  applyUnitaryOps(state, [call(block, Array.from({ length: n }, (_, k) => k))]);
+  applyUnitaryOps(state, [call(block, Array.from({ length: n }, (_, k) => k))], thresholds.simulation);
   // Expected: b†_{k1} ⋯ b†_{kN} |vac> = Σ_S det V[S, occ] |S> (the decomposition's own V).
   let maxError = 0;
   for (let s = 0; s < 2 ** n; s++) {
@@ -197,6 +188,7 @@ export function checkModelBlocks(model: FermionModel, options: CheckModelOptions
     tolerance: options.tolerance ?? 1e-10,
     precision: options.precision ?? 1e-6,
     ...(options.maxSimulationWork === undefined ? {} : { maxSimulationWork: options.maxSimulationWork }),
+    ...(options.simulation === undefined ? {} : { simulation: options.simulation }),
   };
   const n = model.modes;
   const rows: CheckRow[] = [];
@@ -210,6 +202,8 @@ export function checkModelBlocks(model: FermionModel, options: CheckModelOptions
   for (const [e, part] of [[H, 'all'], [A, 'A'], [B, 'B']] as const) {
     rows.push(checkItem({ encoding: e, reference: () => fockReference(modelFockTerms(model, part), n) }, thresholds));
   }
+  const diagonal = diagonalCheckItem(model, thresholds.precision);
+  if (diagonal !== null) rows.push(checkItem(diagonal, thresholds));
   const TA = oneBodyOfA(model);
   const rotation = oneBodyRotation(TA);
   rows.push(...orbitalRows(TA, rotation, thresholds));

@@ -25,6 +25,28 @@ describe('polewright cost', () => {
     expect(json).toMatchObject({ tool: 'polewright', command: 'cost', inputs: { model, pair: [0, 0], precision: 0.05, energy: -1.5, toffoliT: 4, multiControl: 'measured', prepToffoli: null } });
   });
 
+  it("reports B's encoding (JSON and a note line), and --whole-fock drops the preconditioned route's window", () => {
+    const windowed = JSON.parse(runCli(['cost', model, '--json', '--energy', '-1.5', '--precision', '0.05']).stdout);
+    const whole = JSON.parse(runCli(['cost', model, '--json', '--energy', '-1.5', '--precision', '0.05', '--whole-fock', '--b-encoding', 'arithmetic']).stdout);
+    const b = windowed.preconditioned.bEncoding;
+    expect(['pauli', 'arithmetic']).toContain(b.used);
+    // Dimer, U = 4: the Pauli LCU of B' = Σ_sites (U/4)(−Z↑ − Z↓ + Z↑Z↓) has α = 2·3U/4 = 6 (from memory: Jordan–Wigner of n = (1 − Z)/2);
+    // the arithmetic β is at most U·N/2 on the N = 3 (particle) or N = 1 (hole) window.
+    expect(b.alphaPauli).toBeCloseTo(6, 12);
+    expect(b.alphaArithmetic).toBeLessThanOrEqual(6);
+    expect(b.toffoli.pauli).toBeGreaterThan(0);
+    expect(windowed.direct.bEncoding).toBeNull();
+    expect(whole.inputs).toMatchObject({ bEncoding: 'arithmetic', window: false });
+    expect(whole.preconditioned.bEncoding).toMatchObject({ used: 'arithmetic', alphaArithmetic: 4 });
+    expect(whole.preconditioned.parts[0].notes.join('\n')).toMatch(/whole Fock space/);
+    expect(windowed.preconditioned.parts[0].notes.join('\n')).toMatch(/electron window/);
+    const table = runCli(['cost', model, '--energy', '-1.5', '--precision', '0.05']).stdout;
+    expect(table).toMatch(/preconditioned \(particle\): B' encoding used: .*Pauli alpha = 6\.000, arithmetic alpha = /);
+    const bad = runCli(['cost', model, '--b-encoding', 'dense']);
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(/--b-encoding must be pauli, arithmetic or cheaper/);
+  });
+
   it('says in the table that the ground-state preparation is not counted', () => {
     const result = runCli(['cost', model]);
     expect(result.status).toBe(0);

@@ -9,6 +9,8 @@ import { CircuitBuilder } from '../../src/circuit/CircuitBuilder.js';
 import type { Block, Circuit } from '../../src/circuit/types.js';
 import { quantumFourierTransform } from '../../src/arithmetic/quantumFourierTransform.js';
 import { cuccaroAdder } from '../../src/arithmetic/cuccaroAdder.js';
+import { fourierConstantAdder } from '../../src/arithmetic/fourierConstantAdder.js';
+import { ripplePairAddition } from '../../src/arithmetic/rippleConstantAddition.js';
 import { orbitalRotation } from '../../src/rotations/orbitalRotation.js';
 import { phasedGivensRotation } from '../../src/rotations/phasedGivensRotation.js';
 import { randomUnitary } from '../rotations/helpers/randomMatrices.js';
@@ -18,6 +20,7 @@ import { singleCharge, singleKind, sumCounts, type HierarchyCount } from '../../
 import { structuredBlockCounts, structuredCircuitCounts } from '../../src/cost/structuredCounts.js';
 import { structuredGateKind } from '../../src/cost/structuredGateKind.js';
 import { lowerKinds } from '../../src/cost/decompositionTable.js';
+import { resourceTotals } from '../../src/cost/resourceTotals.js';
 import { tally } from '../../src/cost/Tally.js';
 import { constantAngleCircuit } from './helpers/constantAngleCircuit.js';
 
@@ -126,5 +129,32 @@ describe('known constructions', () => {
     const table = collectOverrides([block], defaultOverrideRules());
     const count = structuredBlockCounts(block, table, { controls: 1 });
     expect(count.charges.get('SELECT by unary iteration')?.tally.toffoli).toBe(items - 1);
+  });
+
+  it('a pair term holds its AND for 1 Toffoli with measured uncompute (2 otherwise), around its t-controlled additions', () => {
+    // Gidney, Quantum 2, 74 (2018): a temporary logical-AND costs 4 T (one Toffoli's worth) to compute and 0 T to erase.
+    const width = 4;
+    const pairs = [[0, 1], [1, 2], [0, 2]] as const;
+    const adder = fourierConstantAdder(width, 1, { pairOnlyControls: 2, pairs });
+    const measured = structuredBlockCounts(adder, collectOverrides([adder], defaultOverrideRules()));
+    const clean = structuredBlockCounts(adder, collectOverrides([adder], defaultOverrideRules({ multiControl: 'clean' })));
+    const byDisplay = (count: HierarchyCount, display: string): number =>
+      [...count.kinds.values()].filter((k) => k.kind.display === display).reduce((sum, k) => sum + k.count, 0);
+    const charge = measured.charges.get('temporary logical-AND (measured uncompute)');
+    expect(charge).toMatchObject({ applications: pairs.length, tally: { toffoli: pairs.length } });
+    expect(byDisplay(measured, 'ccx')).toBe(0);
+    expect(clean.charges.size).toBe(0);
+    expect(byDisplay(clean, 'ccx')).toBe(2 * pairs.length);
+    // The phases are counted either way: width under t per pair, width under c_0 for the weight (the offset's uncontrolled).
+    expect(byDisplay(measured, 'ctrl @ p')).toBe(width * (pairs.length + 1));
+    expect(byDisplay(clean, 'ctrl @ p')).toBe(width * (pairs.length + 1));
+    // Same for the ripple route: one AND per pair, the ripple addition (loads from t, Cuccaro adder) counted as simulated.
+    const ripple = defineBlock({ name: 'ripple_pairs', role: 'test', qubits: 2 * width + 5 }, pairs.flatMap(([a, b]) =>
+      ripplePairAddition(5, { register: [0, 1, 2, 3], scratch: [4, 5, 6, 7], carry: 8, pair: [9 + a, 9 + b], and: 12 })));
+    const rippleMeasured = resourceTotals(structuredBlockCounts(ripple, collectOverrides([ripple], defaultOverrideRules())));
+    const rippleClean = resourceTotals(structuredBlockCounts(ripple, collectOverrides([ripple], defaultOverrideRules({ multiControl: 'clean' }))), { multiControl: 'clean' });
+    // Cuccaro modulo 2^w: 2w − 2 Toffolis per addition (Cuccaro et al., arXiv:quant-ph/0410184, from memory), + 1 or 2 per AND.
+    expect(rippleMeasured.toffoli).toBe(pairs.length * (2 * width - 2 + 1));
+    expect(rippleClean.toffoli).toBe(pairs.length * (2 * width - 2 + 2));
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { ladderEncoding } from '../../src/blocks/builders/ladderEncoding.js';
-import { checkItem, checkModelBlocks, fockReference, MAX_SIMULATED_QUBITS } from '../../src/verify/checkModelBlocks.js';
+import { checkItem, checkModelBlocks, MAX_SIMULATED_QUBITS } from '../../src/verify/checkModelBlocks.js';
+import { fockReference } from '../../src/verify/fockReference.js';
 
 const THRESHOLDS = { tolerance: 1e-10, precision: 1e-3 };
 import { hubbard } from '../helpers/models.js';
@@ -37,7 +38,7 @@ describe('checkModelBlocks(model)', () => {
   it('skips every row of a 30-mode model (too wide to simulate) instead of failing to form a matrix', () => {
     const model = { ...hubbard({ sites: 15, hopping: 1, interaction: 2, chemicalPotential: 0 }), electrons: 2 };
     const rows = checkModelBlocks(model);
-    expect(rows.length).toBe(2 * 30 + 6);
+    expect(rows.length).toBe(2 * 30 + 7);
     for (const row of rows) {
       expect(row.verdict).toBe('skipped');
       expect(row.reason).toMatch(/simulation limit of 20|10 modes/);

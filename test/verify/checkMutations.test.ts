@@ -9,7 +9,8 @@ import { loadModelFile } from '../../src/model/loadModelFile.js';
 import type { LadderSum, LadderTerm } from '../../src/operators/LadderSum.js';
 import { jordanWigner } from '../../src/operators/jordanWigner.js';
 import { modelHamiltonian } from '../../src/operators/modelHamiltonian.js';
-import { checkItem, fockReference } from '../../src/verify/checkModelBlocks.js';
+import { checkItem } from '../../src/verify/checkModelBlocks.js';
+import { fockReference } from '../../src/verify/fockReference.js';
 import { modelFockTerms } from '../../src/verify/internal/fockOperatorMatrix.js';
 
 const SCENARIOS = readdirSync('circuits').filter((f) => f.endsWith('.json'));

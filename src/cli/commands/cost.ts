@@ -29,6 +29,8 @@ interface CostCliOptions {
   readonly prepToffoli?: string;
   readonly toffoliT: string;
   readonly multiControl: string;
+  readonly bEncoding: string;
+  readonly wholeFock?: boolean;
   readonly json?: boolean;
   readonly vary?: string;
   readonly out?: string;
@@ -68,6 +70,10 @@ function compareOptions(model: FermionModel, options: CostCliOptions): CompareOp
   if (multiControl !== 'measured' && multiControl !== 'clean' && multiControl !== 'dirty') {
     throw new InputError(`--multi-control must be measured, clean or dirty, got "${multiControl}"`);
   }
+  const bEncoding = options.bEncoding;
+  if (bEncoding !== 'pauli' && bEncoding !== 'arithmetic' && bEncoding !== 'cheaper') {
+    throw new InputError(`--b-encoding must be pauli, arithmetic or cheaper, got "${bEncoding}"`);
+  }
   const z = options.z === undefined ? { re: (model.grid.from + model.grid.to) / 2, im: model.broadening } : parseZ(options.z);
   return {
     pair: parsePair(options.pair, model.modes),
@@ -75,12 +81,14 @@ function compareOptions(model: FermionModel, options: CostCliOptions): CompareOp
     precision,
     toffoliT,
     multiControl,
+    bEncoding,
+    window: options.wholeFock !== true,
     ...(options.energy === undefined ? {} : { energy: parseFiniteNumber('--energy', options.energy) }),
     ...(options.prepToffoli === undefined ? {} : { prepToffoli: parseNonNegativeInteger('--prep-toffoli', options.prepToffoli) }),
   };
 }
 
-const FIGURES = ['logicalQubits', 'toffoli', 'tCount', 'rotations', 'queries', 'shots', 'totalToffoli', 'alpha', 'degree', 'errorBudget', 'parts', 'prepToffoli'];
+const FIGURES = ['logicalQubits', 'toffoli', 'tCount', 'rotations', 'queries', 'shots', 'totalToffoli', 'alpha', 'degree', 'errorBudget', 'parts', 'prepToffoli', 'bEncoding'];
 
 function routeJson(cost: GreenCost | UnavailableRoute): Record<string, unknown> {
   if ('unavailable' in cost) return { available: false, reason: cost.unavailable, ...Object.fromEntries(FIGURES.map((f) => [f, null])) };
@@ -123,9 +131,11 @@ function routeJson(cost: GreenCost | UnavailableRoute): Record<string, unknown> 
       cliffords: p.perRun.cliffords,
       overrides: p.perRun.charges,
       shotsPerTest: p.plainShotsPerTest,
+      bEncoding: p.bEncoding ?? null,
       notes: p.notes,
     })),
     prepToffoli: cost.prepToffoli,
+    bEncoding: cost.bEncoding ?? null,
   };
 }
 
@@ -206,6 +216,8 @@ export function registerCostCommand(program: Command): void {
     .option('--prep-toffoli <N>', 'Toffolis of one ground-state preparation (default: not counted)')
     .option('--toffoli-t <4|7>', 'T gates per Toffoli', '4')
     .option('--multi-control <method>', 'multi-controlled X: measured, clean or dirty', 'measured')
+    .option('--b-encoding <kind>', "B' of the preconditioned route: pauli, arithmetic (B diagonal) or cheaper (fewer Toffolis)", 'cheaper')
+    .option('--whole-fock', 'preconditioned route on the whole Fock space (no electron-number window)')
     .option('--json', 'print { "preconditioned": {...}, "direct": {...} }')
     .option('--vary <KEY=v1,v2,...>', 'rerun over values of one model parameter; needs --out')
     .option('--out <dir>', 'directory for cost.csv and cost.svg (with --vary)')
