@@ -14,21 +14,26 @@ export interface PrepareOptions {
   readonly role?: string;
   /** Relative tolerance on the norm (default 1e-10). */
   readonly normTolerance?: number;
+  /** Largest register accepted (default MAX_PREPARED_QUBITS; an LCU's PREPARE allows MAX_LCU_INDEX_QUBITS). */
+  readonly maxQubits?: number;
 }
 
-/** Largest register prepareAmplitudes accepts. */
+/** Largest register prepareAmplitudes accepts by default (the exact preparation of a simulated state). */
 export const MAX_PREPARED_QUBITS = 14;
+/** Largest index register of an LCU's PREPARE: 2^22 terms, built in O(22·2^22) for costing, far beyond simulation. */
+export const MAX_LCU_INDEX_QUBITS = 22;
 
 /**
- * @param re real parts, length 2^m (m ≥ 1, m ≤ 14); qubit q is bit q of the index.
+ * @param re real parts, length 2^m (1 ≤ m ≤ options.maxQubits, default 14); qubit q is bit q of the index.
  * @param im imaginary parts (omit for a real state).
  * @throws RangeError when the length is not a power of two or the vector is not normalised.
  */
 export function prepareAmplitudes(re: ArrayLike<number>, im?: ArrayLike<number>, options: PrepareOptions = {}): Block {
   const size = re.length;
   const m = Math.log2(size);
-  if (!Number.isInteger(m) || m < 1 || m > MAX_PREPARED_QUBITS) {
-    throw new RangeError(`prepareAmplitudes: length ${size} is not 2^m with 1 ≤ m ≤ ${MAX_PREPARED_QUBITS}`);
+  const maxQubits = options.maxQubits ?? MAX_PREPARED_QUBITS;
+  if (!Number.isInteger(m) || m < 1 || m > maxQubits) {
+    throw new RangeError(`prepareAmplitudes: length ${size} is not 2^m with 1 ≤ m ≤ ${maxQubits}`);
   }
   if (im && im.length !== size) throw new RangeError('prepareAmplitudes: re and im lengths differ');
   const weights = new Float64Array(size);

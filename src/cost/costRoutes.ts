@@ -10,6 +10,7 @@
  * the route fewer Toffolis per application (controlled, as the Hadamard test calls it), counted here.
  */
 import type { BlockEncoding } from '../blocks/BlockEncoding.js';
+import { isInputError } from '../core/InputError.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
 import { MIN_PRECISION } from '../resolvent/planResolvent.js';
@@ -99,7 +100,8 @@ function resolvent(model: FermionModel, w: ComplexScalar, route: RouteName, opti
   try {
     cost = plan(model, w, route, options, settings);
   } catch (error) {
-    if (error instanceof UnreachablePrecisionError) return { unavailable: error.message };
+    // A route that cannot be planned (an unreachable precision, an LCU beyond its size limit) is reported, not fatal.
+    if (error instanceof UnreachablePrecisionError || isInputError(error)) return { unavailable: error.message };
     throw error;
   }
   const r = cost.report;

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { CircuitBuilder } from '../../src/circuit/CircuitBuilder.js';
 import { blockCounts } from '../../src/circuit/gateCounts.js';
 import { call, gate } from '../../src/circuit/ops.js';
-import { prepareAmplitudes } from '../../src/blocks/prepareAmplitudes.js';
+import { MAX_LCU_INDEX_QUBITS, prepareAmplitudes } from '../../src/blocks/prepareAmplitudes.js';
 import { uniformlyControlledRotation } from '../../src/blocks/uniformlyControlledRotation.js';
 import type { GateOp } from '../../src/circuit/types.js';
 import { simulateState } from '../../src/sim/simulateState.js';
@@ -59,6 +59,12 @@ describe('prepareAmplitudes(re, im)', () => {
   it('rejects an unnormalised vector and a length that is not a power of two', () => {
     expect(() => prepareAmplitudes(new Float64Array([1, 1]))).toThrow(/norm/);
     expect(() => prepareAmplitudes(new Float64Array([1, 0, 0]))).toThrow(/2\^m/);
+  });
+
+  it('refuses 2^15 amplitudes by default and builds them under the larger limit of an LCU (MAX_LCU_INDEX_QUBITS)', () => {
+    const uniform = new Float64Array(2 ** 15).fill(2 ** -7.5);
+    expect(() => prepareAmplitudes(uniform)).toThrow(/1 ≤ m ≤ 14/);
+    expect(prepareAmplitudes(uniform, undefined, { maxQubits: MAX_LCU_INDEX_QUBITS }).qubits).toBe(15);
   });
 });
 

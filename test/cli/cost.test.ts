@@ -60,8 +60,11 @@ describe('polewright cost', () => {
     const result = runCli(['cost', model, '--vary', 'hopping=1,10', '--out', out]);
     expect(result.status).toBe(0);
     const csv = readFileSync(join(out, 'cost.csv'), 'utf8').trim().split('\n');
-    expect(csv[0]).toMatch(/^hopping,route,/);
+    expect(csv[0]).toMatch(/^hopping,route,.*,queries,/);
     expect(csv).toHaveLength(5);
+    // One fitted-exponent line per route (the fit itself is tested in test/report/logLogSlope.test.ts).
+    expect(result.stdout).toMatch(/preconditioned: Toffoli per run ~ hopping\^-?\d+\.\d\d, queries ~ hopping\^-?\d+\.\d\d/);
+    expect(result.stdout).toMatch(/direct: Toffoli per run ~ hopping\^/);
     expect(readFileSync(join(out, 'cost.svg'), 'utf8')).toMatch(/^<svg/);
   });
 

@@ -11,7 +11,9 @@ import type { PauliSum, PauliTerm } from '../../operators/PauliSum.js';
 import { pauliSumMatrix } from '../../operators/pauliSumMatrix.js';
 import { simplifyPauli } from '../../operators/simplifyPauli.js';
 import { memoiseMatrix, type BlockEncoding } from '../BlockEncoding.js';
+import { InputError } from '../../core/InputError.js';
 import { linearCombination } from '../combine/linearCombination.js';
+import { MAX_LCU_INDEX_QUBITS } from '../prepareAmplitudes.js';
 import { zeroEncoding } from './zeroEncoding.js';
 
 /** Name of a Pauli string for display, qubit 0 first, e.g. "X0 Z1 Y3" ("I" for the identity). */
@@ -48,10 +50,16 @@ function stringEncoding(term: PauliTerm, qubits: number): BlockEncoding {
   };
 }
 
-/** Encodes the simplified sum (like strings merged, exact zeros dropped); α is its 1-norm. */
+/**
+ * Encodes the simplified sum (like strings merged, exact zeros dropped); α is its 1-norm.
+ * @throws InputError naming `label` when the sum has more than 2^MAX_LCU_INDEX_QUBITS terms (a model too large for an LCU).
+ */
 export function pauliLcu(given: PauliSum, label: string): BlockEncoding {
   const sum = simplifyPauli(given);
   if (sum.terms.length === 0) return zeroEncoding(sum.qubits, label);
+  if (sum.terms.length > 2 ** MAX_LCU_INDEX_QUBITS) {
+    throw new InputError(`the Pauli LCU of ${label} would have ${sum.terms.length} terms; at most 2^${MAX_LCU_INDEX_QUBITS} are supported`);
+  }
   const combination = linearCombination(
     sum.terms.map((t) => ({ coefficient: { re: t.re, im: t.im }, encoding: stringEncoding(t, sum.qubits) })),
     label,

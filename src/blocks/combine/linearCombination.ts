@@ -12,7 +12,7 @@ import type { UnitaryOp } from '../../circuit/types.js';
 import { ancillaQubits, ancillaRoles, memoiseMatrix, type AncillaRegister, type AncillaRole, type BlockEncoding } from '../BlockEncoding.js';
 import { weightedSum } from '../../linalg/weightedSum.js';
 import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
-import { prepareAmplitudes } from '../prepareAmplitudes.js';
+import { MAX_LCU_INDEX_QUBITS, prepareAmplitudes } from '../prepareAmplitudes.js';
 import { indexControls } from '../internal/indexControls.js';
 import { registersFromRoles } from '../internal/registersFromRoles.js';
 
@@ -35,7 +35,7 @@ export function linearCombination(terms: readonly WeightedEncoding[], label: str
   const workQubits = Array.from({ length: work }, (_, k) => n + indexBits + k);
   const amplitudes = new Float64Array(1 << indexBits);
   magnitudes.forEach((m, k) => (amplitudes[k] = Math.sqrt(m / lambda)));
-  const prepare = prepareAmplitudes(amplitudes, undefined, { name: 'lcu_prepare', role: `PREPARE of ${label}` });
+  const prepare = prepareAmplitudes(amplitudes, undefined, { name: 'lcu_prepare', role: `PREPARE of ${label}`, maxQubits: MAX_LCU_INDEX_QUBITS });
   const select: UnitaryOp[] = [];
   terms.forEach((t, k) => {
     const { controls, negControls } = indexControls(k, index);

@@ -11,6 +11,7 @@ import { writeFileAtomic } from '../../core/writeFileAtomic.js';
 import { compareRoutes, ROUTES, type CompareOptions, type RouteComparison } from '../../cost/compareRoutes.js';
 import type { GreenCost, UnavailableRoute } from '../../cost/greenCost.js';
 import { varyModelInput } from '../../cost/varyModelInput.js';
+import { logLogSlope } from '../../report/logLogSlope.js';
 import { describeModel } from '../../model/describeModel.js';
 import type { FermionModel } from '../../model/FermionModel.js';
 import { loadModelFile } from '../../model/loadModelFile.js';
@@ -172,7 +173,20 @@ function tableReport(model: FermionModel, comparison: RouteComparison, options: 
   );
 }
 
-const CSV_COLUMNS = ['logicalQubits', 'toffoli', 'tCount', 'rotations', 'degree', 'alpha', 'shots', 'totalToffoli'];
+const CSV_COLUMNS = ['logicalQubits', 'toffoli', 'tCount', 'rotations', 'queries', 'degree', 'alpha', 'shots', 'totalToffoli'];
+
+/** The fitted exponents of Toffoli and queries against the varied parameter, one line per route. */
+function exponentLines(key: string, rows: readonly CostCsvRow[]): string[] {
+  return ROUTES.map((route) => {
+    const mine = rows.filter((r) => r.route === route);
+    const x = mine.map((r) => r.parameter);
+    const fit = (column: string): string => {
+      const b = logLogSlope(x, mine.map((r) => r.values[column]!));
+      return b === null ? 'n/a' : b.toFixed(2);
+    };
+    return `${route}: Toffoli per run ~ ${key}^${fit('toffoli')}, queries ~ ${key}^${fit('queries')} (least-squares fit of log against log over ${mine.length} values)`;
+  });
+}
 
 async function sweep(file: string, options: CostCliOptions, out: string): Promise<string> {
   const { key, values } = parseVary(options.vary!);
@@ -184,7 +198,7 @@ async function sweep(file: string, options: CostCliOptions, out: string): Promis
     for (const route of ROUTES) {
       const c = comparison.routes[route];
       if ('unavailable' in c) continue;
-      rows.push({ parameter: value, route, values: { logicalQubits: c.logicalQubits, toffoli: c.toffoli, tCount: c.tCount, rotations: c.rotations, degree: c.degree, alpha: c.alpha, shots: c.shots, totalToffoli: c.totalToffoli } });
+      rows.push({ parameter: value, route, values: { logicalQubits: c.logicalQubits, toffoli: c.toffoli, tCount: c.tCount, rotations: c.rotations, queries: Object.values(c.queries)[0] ?? 0, degree: c.degree, alpha: c.alpha, shots: c.shots, totalToffoli: c.totalToffoli } });
     }
   }
   const svg = await costChartSvg({
@@ -200,7 +214,7 @@ async function sweep(file: string, options: CostCliOptions, out: string): Promis
   writeFileAtomic(join(out, 'cost.svg'), svg);
   const missing = values.length * ROUTES.length - rows.length;
   const skipped = missing === 0 ? '' : `; ${missing} route/value pairs not available, left out`;
-  return `wrote ${join(out, 'cost.csv')} and ${join(out, 'cost.svg')} (${values.length} values of ${key}, both routes${skipped})\n`;
+  return `wrote ${join(out, 'cost.csv')} and ${join(out, 'cost.svg')} (${values.length} values of ${key}, both routes${skipped})\n${exponentLines(key, rows).join('\n')}\n`;
 }
 
 /** Adds `cost MODEL [options]` to the program. */
