@@ -174,6 +174,10 @@ export function planResolvent(model: FermionModel, w: ComplexScalar, options: Re
     // directShift's construction (w·I − H by shiftedEncoding) on the model's H built once.
     const M = shiftedEncoding(encodingsOf(model).H, w, 'w - H');
     const { K, source, aPriori } = conditionOf(1 / eta, options, caller, true);
+    if (!(1 / (M.alpha * K) - M.errorBound > 0)) {
+      // Only for absurd shifts (|w| near the double range): 1/(α_M K) underflows.
+      throw new UnreachablePrecisionError(`${caller}: no precision is reachable on the direct route: δ = 1/(α_M K) − e_M ≤ 0 in double precision (α_M = ${M.alpha}, K = ${K})`, null);
+    }
     return {
       shift: 0, conditionSource: source, aPrioriConditionBound: aPriori, M, F: null, B: null, H: M, conditionBound: K, normBoundM: M.alpha, delta: inverseDelta(M.alpha, K, M.errorBound), precision: epsilon,
       split: { polynomial: epsilon, quantisation: 0 }, polynomialError: POLYNOMIAL_SHARE * epsilon, window: null, bEncoding: null,

@@ -61,7 +61,9 @@ export const DEFAULT_TIME_LIMITS: Readonly<Record<string, number>> = {
   run: 15_000,
   exact: 30_000,
   cost: 30_000,
-  check: 60_000,
+  // The slowest valid check of a seed scenario (anderson-two-bath.json, four QSVT rows) takes 50–140 s on the loaded
+  // 2-core machine: a limit below that would count a slow valid run as a hang.
+  check: 240_000,
   estimate: 60_000,
   build: 60_000,
   verify: 30_000,

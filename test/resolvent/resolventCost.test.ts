@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { resolventCost } from '../../src/resolvent/resolventCost.js';
 import { resolventEncoding } from '../../src/resolvent/resolventEncoding.js';
+import { UnreachablePrecisionError } from '../../src/resolvent/UnreachablePrecisionError.js';
 import { hubbard } from '../helpers/models.js';
 
 /**
@@ -84,5 +85,7 @@ describe('resolventCost', () => {
     expect(() => resolventEncoding(model, { re: 0.2, im: 0.05 }, { route: 'preconditioned', precision: 1e-3, fastInverse: { maxBits: 1 } })).toThrow(
       /cannot be met|δ = .* ≤ 0/,
     );
+    // |w| near the double range: 1/(α_M K) underflows; the direct route is unreachable, not an internal failure (a fuzz finding).
+    expect(() => resolventCost(model, { re: 1e300, im: 1e-10 }, { route: 'direct', precision: 0.05 })).toThrow(UnreachablePrecisionError);
   });
 });
