@@ -11,17 +11,8 @@ import { parseModel } from '../../src/model/parseModel.js';
 import { ladderSumMatrix } from '../../src/operators/ladderSumMatrix.js';
 import { modelHamiltonian } from '../../src/operators/modelHamiltonian.js';
 import { oneBodyRotation } from '../../src/rotations/oneBodyRotation.js';
+import { reciprocalFrequencies as frequencies } from '../helpers/reciprocalFrequencies.js';
 import { expectClose, expectComplexClose } from '../helpers/close.js';
-
-/** Every ν of the reciprocal grid: per axis the n integers −⌊(n−1)/2⌋ … ⌊n/2⌋. */
-function frequencies(points: readonly number[]): number[][] {
-  let all: number[][] = [[]];
-  for (const n of points) {
-    const axis = Array.from({ length: n }, (_, s) => s - Math.floor((n - 1) / 2));
-    all = all.flatMap((nu) => axis.map((v) => [...nu, v]));
-  }
-  return all;
-}
 
 const kSquared = (nu: readonly number[], box: readonly number[]): number => nu.reduce((s, v, d) => s + ((2 * Math.PI * v) / box[d]!) ** 2, 0);
 

@@ -5,17 +5,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { coulombSeries, externalPotential, kineticSeries } from '../../../src/model/internal/dualBasisSums.js';
 import { axisFrequency, displacementIndex, planeWaveGrid } from '../../../src/model/internal/planeWaveGrid.js';
+import { reciprocalFrequencies as frequencies } from '../../helpers/reciprocalFrequencies.js';
 import { expectClose } from '../../helpers/close.js';
-
-/** Every ν of the reciprocal grid as a list of integer vectors: per axis −⌊(n−1)/2⌋ … ⌊n/2⌋. */
-function frequencies(points: readonly number[]): number[][] {
-  let all: number[][] = [[]];
-  for (const n of points) {
-    const axis = Array.from({ length: n }, (_, s) => s - Math.floor((n - 1) / 2));
-    all = all.flatMap((nu) => axis.map((v) => [...nu, v]));
-  }
-  return all;
-}
 
 /** Grid coordinates r_p = (i_d L_d / n_d)_d, first dimension fastest. */
 function positions(points: readonly number[], box: readonly number[]): number[][] {
