@@ -40,13 +40,8 @@ export const ROUTES: readonly RouteName[] = ['preconditioned', 'direct'];
 export function compareRoutes(model: FermionModel, options: CompareOptions): RouteComparison {
   const given = options.energy !== undefined;
   const groundEnergy = options.energy ?? groundEnergyBound(model);
-  const settings: RouteSettings = {
-    bEncoding: options.bEncoding ?? 'cheaper',
-    window: options.window ?? true,
-    ...(options.multiControl ? { multiControl: options.multiControl } : {}),
-    ...(options.unaryIteration !== undefined ? { unaryIteration: options.unaryIteration } : {}),
-    ...(options.gidneyAdder !== undefined ? { gidneyAdder: options.gidneyAdder } : {}),
-  };
+  // The route's own Toffoli counts (for the cheaper B') use the same decomposition and override options as the totals.
+  const settings: RouteSettings = { ...options, bEncoding: options.bEncoding ?? 'cheaper', window: options.window ?? true };
   const cost = (route: RouteName): GreenCost | UnavailableRoute =>
     greenCost({ ...options, model, groundEnergy, build: routeBuilder(model, route, settings) });
   const routes = { preconditioned: cost('preconditioned'), direct: cost('direct') };

@@ -7,7 +7,7 @@
  * diagonal of the rounded coefficients (computed from the model's terms and the grid's integer weights, not from the
  * circuit), with only the floating-point part of its bound; the label says so.
  */
-import { diagonalBound } from '../inversion/diagonalBound.js';
+import { diagonalTermsOfB } from '../inversion/diagonalBound.js';
 import { diagonalEncoding } from '../inversion/diagonalEncoding.js';
 import type { FermionModel } from '../model/FermionModel.js';
 import type { CheckItem } from './CheckItem.js';
@@ -33,9 +33,8 @@ export function diagonalCheckItem(model: FermionModel, precision: number): Check
     const terms = [...modelFockTerms(model, 'B'), { factors: [], re: -encoding.shift, im: 0 }];
     return { encoding, reference: () => fockReference(terms, n) };
   }
-  const bound = diagonalBound(model);
-  if ('notDiagonal' in bound) return null;
-  const { terms } = bound;
+  const terms = diagonalTermsOfB(model);
+  if ('notDiagonal' in terms) return null;
   const { step, single, pairs } = encoding.grid;
   const reference = (): ReferenceOperator => {
     const d = new Float64Array(2 ** n);

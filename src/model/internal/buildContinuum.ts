@@ -9,11 +9,10 @@
  * Modes: grid point p spin up is mode p, spin down is mode P + p (points numbered first dimension fastest).
  * The split: A = the kinetic T, B = U (moved through oneBodyInB) + H_int.
  */
-import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
 import type { TwoBodyTerm } from '../FermionModel.js';
 import { MAX_ENERGY, MAX_MODES } from '../modelLimits.js';
 import type { BuiltHamiltonian } from './BuiltHamiltonian.js';
-import { zeroComplexMatrix } from './complexMatrix.js';
+import { addToEntry, zeroComplexMatrix } from './complexMatrix.js';
 import { coulombSeries, externalPotential, kineticSeries } from './dualBasisSums.js';
 import type { ContinuumInput } from './modelSchemas.js';
 import { onSiteInteraction } from './onSiteInteraction.js';
@@ -57,9 +56,9 @@ export function buildContinuum(input: ContinuumInput, problems: Problem[]): Buil
   const oneBodyInB = zeroComplexMatrix(2 * size);
   for (const offset of [0, size]) {
     for (let p = 0; p < size; p++) {
-      for (let q = 0; q < size; q++) setEntry(oneBody, offset + p, offset + q, kinetic[displacementIndex(grid, p, q)]!);
-      oneBody.re[(offset + p) * 2 * size + offset + p]! += potential[p]!;
-      setEntry(oneBodyInB, offset + p, offset + p, potential[p]!);
+      for (let q = 0; q < size; q++) addToEntry(oneBody, offset + p, offset + q, kinetic[displacementIndex(grid, p, q)]!, 0);
+      addToEntry(oneBody, offset + p, offset + p, potential[p]!, 0);
+      addToEntry(oneBodyInB, offset + p, offset + p, potential[p]!, 0);
     }
   }
   const up = Array.from({ length: size }, (_, p) => p);
@@ -101,10 +100,6 @@ function interactionTerms(grid: PlaneWaveGrid, interaction: ContinuumInput['cont
   const terms: TwoBodyTerm[] = [];
   for (let p = 0; p < size; p++) terms.push(...onSiteInteraction(p, size + p, strength));
   return terms;
-}
-
-function setEntry(m: ComplexMatrix, i: number, j: number, value: number): void {
-  m.re[i * m.n + j] = value;
 }
 
 function energyMessage(what: string, value: number, remedy: string): string {
