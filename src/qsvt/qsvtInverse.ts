@@ -6,9 +6,9 @@
  *
  * Error bound (projected-block units). The circuit computes exactly p̃ applied to the actual projected block M̃' of the
  * input (‖M̃' − M'‖ ≤ e_M), where p̃ is the polynomial the phases realise (sup |p̃ − p| ≤ phaseErrorBound). With
- * δ = 1/(α_M K) − e_M > 0, σ_min(M̃') ≥ σ_min(M') − e_M ≥ δ, so ‖p(M̃'†) − s M̃'⁻¹‖ ≤ maxError(p); and
- * s ‖M̃'⁻¹ − M'⁻¹‖ = s ‖M̃'⁻¹ (M' − M̃') M'⁻¹‖ ≤ s e_M (1/δ)(α_M K). Total: maxError + phaseErrorBound + s e_M α_M K/δ.
- * maxError is the polynomial stage's measured value (16 grid points per degree), not a proof.
+ * δ = 1/(α_M K) − e_M > 0, σ_min(M̃') ≥ σ_min(M') − e_M ≥ δ, so ‖p(M̃'†) − s M̃'⁻¹‖ ≤ errorBound(p); and
+ * s ‖M̃'⁻¹ − M'⁻¹‖ = s ‖M̃'⁻¹ (M' − M̃') M'⁻¹‖ ≤ s e_M (1/δ)(α_M K). Total: the polynomial's certified error bound
+ * (inverseApproximation.errorBound) + phaseErrorBound + s e_M α_M K/δ.
  */
 import { memoiseMatrix, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import { adjointEncoding } from '../blocks/combine/adjointEncoding.js';
@@ -66,7 +66,7 @@ export function inverseDelta(alphaM: number, conditionBound: number, inputError:
   return Math.min(delta, 0.5);
 }
 
-/** Relative ε for inverseApproximation such that maxError ≤ polynomialError (scale < δ there). */
+/** Relative ε for inverseApproximation such that its errorBound ≤ polynomialError (scale < δ there). */
 export function relativeInverseError(delta: number, polynomialError: number): number {
   if (!(polynomialError > 0 && polynomialError < 1)) throw new RangeError(`qsvtInverse: polynomial error ${polynomialError} is not in (0, 1)`);
   return Math.min(0.5, polynomialError / delta);
@@ -104,7 +104,7 @@ export function qsvtInverse(encoding: BlockEncoding, options: QsvtInverseOptions
     ...(options.actionOnly !== undefined ? { actionOnly: options.actionOnly } : {}),
     label: options.label ?? `(${encoding.label})^-1`,
   });
-  const errorParts = { polynomial: approximation.maxError, phases: qsvt.phaseErrorBound, inputPropagation: qsvt.propagatedInputError };
+  const errorParts = { polynomial: approximation.errorBound, phases: qsvt.phaseErrorBound, inputPropagation: qsvt.propagatedInputError };
   return {
     ...qsvt,
     label: qsvt.label,

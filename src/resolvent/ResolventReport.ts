@@ -63,7 +63,7 @@ export interface ResolventReport {
   readonly degreeSource: 'measured' | 'truncation bound';
   /** Calls of each factor's block (either direction): M, and inside it F and B (preconditioned) or H (direct). */
   readonly queries: { readonly M: number; readonly fastInverse: number; readonly B: number; readonly H: number };
-  /** Error parts in projected-block units: polynomial maxError, phase residual bound, M's error carried through the inverse, F's own error. */
+  /** Error parts in projected-block units: the polynomial's certified bound, phase residual bound, M's error carried through the inverse, F's own error. */
   readonly errorParts: { readonly polynomial: number; readonly phases: number; readonly inputPropagation: number; readonly fastInverse: number };
   /** Rigorous bound on ‖projected block − (w − H)⁻¹/α‖ (cost-only: the bound the build will meet, with s ≤ δ). */
   readonly errorBound: number;

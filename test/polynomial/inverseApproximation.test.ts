@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluateChebyshev } from '../../src/polynomial/evaluateChebyshev.js';
 import { inverseApproximation } from '../../src/polynomial/inverseApproximation.js';
@@ -31,6 +32,35 @@ describe('inverseApproximation(δ, ε)', () => {
     }
   });
 
+  it('never exceeds its certified errorBound: a dense grid refined around its largest errors by golden-section search', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0.02, max: 0.6, noNaN: true }), fc.double({ min: -10, max: -2, noNaN: true }), (delta, logEpsilon) => {
+        const epsilon = 10 ** logEpsilon;
+        const result = inverseApproximation(delta, epsilon);
+        expect(result.maxError).toBeLessThanOrEqual(result.errorBound);
+        expect(result.errorBound).toBeLessThanOrEqual(epsilon * result.scale);
+        const error = (x: number): number => Math.abs(evaluateChebyshev(result.polynomial, x) - result.scale / x);
+        const count = 40 * result.degree;
+        const grid = Array.from({ length: count }, (_, l) => delta + ((1 - delta) * l) / (count - 1));
+        const largest = grid.map((x, l) => ({ x, l, e: error(x) })).sort((a, b) => b.e - a.e).slice(0, 20);
+        let worst = largest[0]!.e;
+        for (const { l } of largest) {
+          let lo = grid[Math.max(0, l - 1)]!;
+          let hi = grid[Math.min(count - 1, l + 1)]!;
+          for (let step = 0; step < 60; step++) {
+            const a = hi - 0.618 * (hi - lo);
+            const b = lo + 0.618 * (hi - lo);
+            if (error(a) > error(b)) hi = b;
+            else lo = a;
+          }
+          worst = Math.max(worst, error((lo + hi) / 2));
+        }
+        expect(worst).toBeLessThanOrEqual(result.errorBound);
+      }),
+      { numRuns: 25, seed: 5 },
+    );
+  });
+
   it('grows its degree like (1/δ)·log(1/ε): halving δ about doubles it, squaring ε raises it by well under 2× (Childs, Kothari & Somma 2017)', () => {
     const base = inverseApproximation(0.08, 1e-6).degree;
     const halfDelta = inverseApproximation(0.04, 1e-6).degree;
@@ -41,7 +71,7 @@ describe('inverseApproximation(δ, ε)', () => {
     expect(squaredEpsilon / base).toBeLessThan(2.1);
   });
 
-  it('chooses the smallest degree: the next lower odd degree misses ε on the same measure', () => {
+  it('chooses the smallest degree whose certified bound meets ε: the next lower odd degree is refused', () => {
     const result = inverseApproximation(0.1, 1e-4);
     expect(() => inverseApproximation(0.1, 1e-4, { maxDegree: result.degree - 2 })).toThrow(/beyond maxDegree/);
     expect(inverseApproximation(0.1, 1e-4, { maxDegree: result.degree }).degree).toBe(result.degree);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { evaluateChebyshev } from '../../../src/polynomial/evaluateChebyshev.js';
-import { inverseSeriesCoefficients } from '../../../src/polynomial/internal/inverseSeriesCoefficients.js';
+import { inverseSeriesCoefficients, inverseSeriesRounding } from '../../../src/polynomial/internal/inverseSeriesCoefficients.js';
 import { expectClose } from '../../helpers/close.js';
 
 describe('inverseSeriesCoefficients(b, degree)', () => {
@@ -17,6 +17,31 @@ describe('inverseSeriesCoefficients(b, degree)', () => {
     const c = inverseSeriesCoefficients(30, 21);
     for (let k = 0; k <= 21; k += 2) expect(c[k]).toBe(0);
     for (let j = 0; 2 * j + 1 <= 21; j++) expect(Math.sign(c[2 * j + 1]!)).toBe(j % 2 === 0 ? 1 : -1);
+  });
+
+  it('is within its stated rounding bound of the exact coefficients, from exact binomial sums in integer arithmetic', () => {
+    // c_{2j+1} = 4 Σ_{i>j} C(2b, b+i) / 4^b (the same expansion), evaluated with BigInt and divided to ~80 bits.
+    for (const b of [30, 700, 2001]) {
+      const degree = 2 * b - 1;
+      const computed = inverseSeriesCoefficients(b, degree);
+      const { common, relative } = inverseSeriesRounding(b);
+      const binomials: bigint[] = [1n];
+      for (let k = 1; k <= 2 * b; k++) binomials.push((binomials[k - 1]! * BigInt(2 * b - k + 1)) / BigInt(k));
+      const denominator = 4n ** BigInt(b);
+      let tail = 0n;
+      let worst = 0;
+      for (let j = b - 1; j >= 0; j--) {
+        tail += binomials[b + j + 1]!;
+        if (tail === 0n) continue;
+        const shift = BigInt(Math.max(0, 80 - (tail.toString(2).length - denominator.toString(2).length)));
+        const exact = (4 * Number((tail << shift) / denominator)) / 2 ** Number(shift);
+        if (exact < 1e-280) continue;
+        const sign = j % 2 === 0 ? 1 : -1;
+        worst = Math.max(worst, Math.abs(computed[2 * j + 1]! - sign * exact) / exact);
+      }
+      // The reference itself is rounded once to double: one more 2⁻⁵³.
+      expect(worst, `b = ${b}`).toBeLessThanOrEqual(common + relative + 2 ** -53);
+    }
   });
 
   it('refuses a non-positive b', () => {
