@@ -6,7 +6,7 @@
 import { memoiseMatrix, type AncillaRegister, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { qsvtCircuit } from './internal/qsvtCircuit.js';
-import { singularValueFunction } from './internal/singularValueFunction.js';
+import { singularValueFunction } from '../linalg/singularValueFunction.js';
 import { reflectionPhases } from './reflectionPhases.js';
 
 export interface QsvtOptions {
@@ -32,6 +32,8 @@ export interface QsvtOptions {
 }
 
 export interface QsvtEncoding extends BlockEncoding {
+  /** The encoding whose block the sequence calls as U (and inverted, as U†). */
+  readonly queried: BlockEncoding;
   readonly degree: number;
   readonly parity: 'even' | 'odd';
   /** Calls of U and of U† in the sequence: ⌈d/2⌉ and ⌊d/2⌋. */
@@ -81,6 +83,7 @@ export function qsvtEncoding(encoding: BlockEncoding, options: QsvtOptions): Qsv
     exact: memoiseMatrix(exact),
     costNotes: encoding.costNotes.map((note) => ({ ...note, label: `${note.label} (×${d} queries)`, toffoli: note.toffoli * d })),
     errorBound: phaseErrorBound + propagatedInputError,
+    queried: encoding,
     degree: d,
     parity,
     queries: { forward: Math.ceil(d / 2), adjoint: Math.floor(d / 2) },

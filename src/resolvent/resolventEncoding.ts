@@ -9,7 +9,7 @@ import { ancillaQubits, memoiseMatrix, type BlockEncoding } from '../blocks/Bloc
 import { productEncoding } from '../blocks/combine/productEncoding.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
-import { qsvtInverse } from '../qsvt/qsvtInverse.js';
+import { qsvtInverse, type QsvtInverseEncoding } from '../qsvt/qsvtInverse.js';
 import { denseResolvent } from './internal/denseResolvent.js';
 import { planResolvent, type ResolventOptions } from './planResolvent.js';
 import type { ResolventReport } from './ResolventReport.js';
@@ -18,6 +18,8 @@ export type { ResolventOptions } from './planResolvent.js';
 
 export interface ResolventEncoding extends BlockEncoding {
   readonly report: ResolventReport;
+  /** The factors: the block is `inverse` alone (direct) or `inverse` after `fastInverse` (preconditioned). */
+  readonly parts: { readonly inverse: QsvtInverseEncoding; readonly fastInverse: BlockEncoding | null };
 }
 
 /**
@@ -69,5 +71,6 @@ export function resolventEncoding(model: FermionModel, w: ComplexScalar, options
     label,
     exact: memoiseMatrix(() => denseResolvent(model, w, plan.window)),
     report,
+    parts: { inverse, fastInverse: plan.F },
   };
 }

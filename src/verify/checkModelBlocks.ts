@@ -61,21 +61,32 @@ export interface CheckLimits extends CheckThresholds {
   readonly simulation?: SimulationOptions;
 }
 
+/**
+ * What simulating an encoding's block `simulations` times costs: the qubits the simulator keeps (it leaves idle work
+ * qubits out of the state) and the amplitude updates, simulations × 2^stateQubits × gates; `tooWide` when the kept qubits
+ * exceed MAX_SIMULATED_QUBITS (the work is then not estimated).
+ */
+export function simulationWork(encoding: BlockEncoding, simulations: number, simulation: SimulationOptions): { width: number; stateQubits: number; work: number; tooWide: boolean } {
+  const width = encoding.systemQubits + ancillaQubits(encoding);
+  const stateQubits = width > MAX_QUBITS ? width : onZeroAncillas(encoding, simulation).stateQubits;
+  const tooWide = stateQubits > MAX_SIMULATED_QUBITS;
+  const work = tooWide ? Number.POSITIVE_INFINITY : simulations * 2 ** stateQubits * Math.max(1, totalGates(blockCounts(encoding.block)));
+  return { width, stateQubits, work, tooWide };
+}
+
 /** The row for an item: skipped when too wide or too costly to simulate or when its reference cannot be formed, else verified. */
 export function checkItem(item: CheckItem, thresholds: CheckLimits): CheckRow {
   const { encoding } = item;
-  const width = encoding.systemQubits + ancillaQubits(encoding);
-  // The simulator leaves idle work qubits out of the state, so the limits apply to the qubits it keeps.
   const simulation = thresholds.simulation ?? {};
-  const stateQubits = width > MAX_QUBITS ? width : onZeroAncillas(encoding, simulation).stateQubits;
-  if (stateQubits > MAX_SIMULATED_QUBITS) {
+  const width = encoding.systemQubits + ancillaQubits(encoding);
+  const simulations = item.columns?.length ?? (width <= EXHAUSTIVE_LIMIT ? 2 ** encoding.systemQubits : PROBE_SIMULATIONS);
+  const { stateQubits, work, tooWide } = simulationWork(encoding, simulations, simulation);
+  if (tooWide) {
     return skippedRow(encoding, `${stateQubits} simulated qubits (of ${width}) exceed the simulation limit of ${MAX_SIMULATED_QUBITS}`);
   }
   if (item.reference === undefined && encoding.systemQubits > MAX_EXACT_SYSTEM_QUBITS) {
     return skippedRow(encoding, `no reference operator above ${MAX_EXACT_SYSTEM_QUBITS} system qubits`);
   }
-  const simulations = item.columns?.length ?? (width <= EXHAUSTIVE_LIMIT ? 2 ** encoding.systemQubits : PROBE_SIMULATIONS);
-  const work = simulations * 2 ** stateQubits * Math.max(1, totalGates(blockCounts(encoding.block)));
   const limit = thresholds.maxSimulationWork ?? MAX_SIMULATION_WORK;
   if (work > limit) return skippedRow(encoding, `simulation work ${work.toExponential(1)} amplitude updates exceeds the limit ${limit.toExponential(1)}`);
   return encodingCheck(encoding, { tolerance: thresholds.tolerance, precision: thresholds.precision }, {

@@ -11,7 +11,8 @@ import { verifyEncoding, type VerifyOptions } from './verifyEncoding.js';
 export type Verdict = 'pass' | 'fail' | 'inconclusive' | 'skipped';
 
 /** `probe (lower bound)`: random states only, so the error found may be below the true one. */
-export type CheckMethod = 'exhaustive' | 'columns' | 'probe (lower bound)' | 'state' | 'skipped';
+/** `qubitized`: the QSVT sequence's queried block simulated on the columns, the sequence through its 2×2 reduction (qubitizedColumns). */
+export type CheckMethod = 'exhaustive' | 'columns' | 'probe (lower bound)' | 'state' | 'qubitized' | 'skipped';
 
 export interface CheckThresholds {
   /** Largest accepted error of an exact construction (rounding level). */
@@ -66,6 +67,20 @@ function rowBase(encoding: BlockEncoding) {
     errorBound: encoding.errorBound,
     gates: countsToObject(blockCounts(encoding.block)),
     costNotes: encoding.costNotes,
+  };
+}
+
+/** The row of an error found by some other method than verifyEncoding, judged like encodingCheck's rows. */
+export function judgedRow(encoding: BlockEncoding, found: { maxError: number; unitarityDeviation: number; method: CheckMethod }, limits: CheckThresholds): CheckRow {
+  const { verdict, reason } = judge(found.maxError, encoding.errorBound, found.unitarityDeviation, limits);
+  return {
+    ...rowBase(encoding),
+    maxError: found.maxError,
+    unitarityDeviation: found.unitarityDeviation,
+    method: found.method,
+    verdict,
+    passed: verdict === 'pass',
+    ...(reason === undefined ? {} : { reason }),
   };
 }
 

@@ -7,7 +7,8 @@
  * built on that sector's electron window with K = ‖M⁻¹‖ computed exactly there (sectorConditionNumber, padded by 1e-9
  * relative against rounding) when it is below the a-priori 1 + ‖B'‖/|Im w|: on a small model the check can afford the exact
  * norm, which keeps the polynomial degree to what the instance needs. A row whose encoding cannot be built (its degree beyond
- * the cap, an unreachable precision) is skipped with the reason.
+ * the cap, an unreachable precision) is skipped with the reason. A row whose whole sequence is too costly to simulate column
+ * by column is checked by the qubitized method instead (qubitizedResolventRow), or skipped when that too is beyond the limits.
  */
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
@@ -19,7 +20,8 @@ import { fockOperatorMatrix, MAX_DENSE_FOCK_MODES, modelFockTerms } from './inte
 import { sectorConditionNumber } from './internal/sectorConditionNumber.js';
 import { sectorResolvent } from './internal/sectorResolvent.js';
 import { sectorStates } from './inversionCheckItems.js';
-import { denseReference } from './verifyEncoding.js';
+import { qubitizedResolventRow } from './qubitizedResolventRow.js';
+import { denseReference, type ReferenceOperator } from './verifyEncoding.js';
 
 export interface ResolventCheckRowOptions {
   readonly E0: number;
@@ -49,7 +51,9 @@ export function resolventCheckRows(model: FermionModel, options: ResolventCheckR
       if (!(error instanceof RangeError)) throw error;
       return unbuiltRow(plan.label, n, `not built: ${error.message}`);
     }
-    const reference = () => denseReference(sectorResolvent(denseH(), plan.w, { min: plan.electrons, max: plan.electrons }));
-    return checkItem({ encoding, reference, columns: states }, thresholds);
+    let referenceOperator: ReferenceOperator | undefined;
+    const reference = () => (referenceOperator ??= denseReference(sectorResolvent(denseH(), plan.w, { min: plan.electrons, max: plan.electrons })));
+    const whole = checkItem({ encoding, reference, columns: states }, thresholds);
+    return whole.verdict === 'skipped' ? qubitizedResolventRow(encoding, reference, states, thresholds, whole.reason ?? 'not simulated whole') : whole;
   });
 }

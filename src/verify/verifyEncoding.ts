@@ -87,7 +87,8 @@ export function onZeroAncillas(encoding: BlockEncoding, options: SimulationOptio
   return prepareBlockOnZeroAncillas(encoding.block, { ...options, idleZero, inverse });
 }
 
-function referenceColumn(reference: ReferenceOperator, j: number): { re: Float64Array; im: Float64Array } {
+/** Column j of the reference operator. */
+export function referenceColumn(reference: ReferenceOperator, j: number): { re: Float64Array; im: Float64Array } {
   if (reference.column) return reference.column(j);
   const re = new Float64Array(reference.dimension);
   re[j] = 1;

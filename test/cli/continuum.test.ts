@@ -22,15 +22,15 @@ describe('polewright on the continuum scenario', () => {
     expect(report.residual).toBeLessThan(1e-8);
   });
 
-  it('check: every block passes or is skipped as too large to simulate; the rotation and fast inverses pass', () => {
+  it('check: every block passes, the QSVT inverses by the qubitized method; the rotation and fast inverses pass', () => {
     const result = runCli(['check', SCENARIO, '--json']);
     expect(result.stderr).toBe('');
     expect(result.status).toBe(0);
-    const report = JSON.parse(result.stdout) as { ok: boolean; blocks: { label: string; verdict: string; reason?: string }[] };
+    const report = JSON.parse(result.stdout) as { ok: boolean; blocks: { label: string; verdict: string; method: string; reason?: string }[] };
     expect(report.ok).toBe(true);
-    for (const block of report.blocks) {
-      if (block.verdict === 'skipped') expect(block.reason, block.label).toMatch(/simulation (work|limit)/);
-      else expect(block.verdict, block.label).toBe('pass');
+    for (const block of report.blocks) expect(block.verdict, block.label).toBe('pass');
+    for (const label of ['inverse, preconditioned (particle)', 'inverse, preconditioned (hole)', 'inverse, direct (particle)', 'inverse, direct (hole)']) {
+      expect(report.blocks.find((b) => b.label === label)?.method, label).toBe('qubitized');
     }
     for (const label of ['H', 'A (one-body)', 'B (two-body)', 'orbital rotation', 'fast inverse (particle)', 'fast inverse (hole)']) {
       expect(report.blocks.find((b) => b.label === label)?.verdict, label).toBe('pass');

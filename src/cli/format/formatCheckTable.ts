@@ -38,7 +38,9 @@ export function formatCheckTable(
   return `${heading}\n${thresholds}\n${table}\n${summary}\n${reasons.join('')}${notes.join('')}` +
     'max error: largest entry error of <0_anc|U|0_anc> against the reference M/α (exhaustive: every column; columns: the\n' +
     'listed basis columns; probe (lower bound): random states, which may miss the worst direction; state: prepared\n' +
-    'amplitudes against the Slater determinant of the decomposition\'s V). norm estimate: power iteration on E†E,\n' +
+    'amplitudes against the Slater determinant of the decomposition\'s V; qubitized: a QSVT inverse too costly to run\n' +
+    'whole, its queried block simulated on the sector\'s columns and the sequence applied through the 2×2 reduction of\n' +
+    'Jordan\'s lemma, plus an allowance for what leaks out of the sector). norm estimate: power iteration on E†E,\n' +
     'E = <0|U|0> − M/α, a lower estimate of the operator-norm error. bound: the block\'s error bound, "0 (exact\n' +
     'construction)" when the construction is exact up to rounding. A row passes when its error is within\n' +
     'max(tolerance, bound) and its bound within the precision; a bound above the precision is INCONCLUSIVE; a skipped\n' +

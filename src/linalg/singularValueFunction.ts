@@ -3,11 +3,11 @@
  * Gilyén, Su, Low & Wiebe (STOC 2019, Def. 16): W f(Σ) V† for odd f (matrixFunctionOfSingularValues), V f(Σ) V† for even
  * f, computed from the Hermitian eigen-decomposition A†A = V Σ² V†, which fixes V on the kernel of A as well.
  */
-import type { ComplexMatrix } from '../../linalg/ComplexMatrix.js';
-import { adjointMatrix } from '../../linalg/adjointMatrix.js';
-import { hermitianEigen } from '../../linalg/hermitianEigen.js';
-import { matrixMultiply } from '../../linalg/matrixMultiply.js';
-import { matrixFunctionOfSingularValues } from '../../linalg/singularValueTransform.js';
+import type { ComplexMatrix } from './ComplexMatrix.js';
+import { adjointMatrix } from './adjointMatrix.js';
+import { hermitianEigen } from './hermitianEigen.js';
+import { matrixMultiply } from './matrixMultiply.js';
+import { matrixFunctionOfSingularValues } from './singularValueTransform.js';
 
 export function singularValueFunction(a: ComplexMatrix, f: (sigma: number) => number, parity: 'even' | 'odd'): ComplexMatrix {
   if (parity === 'odd') return matrixFunctionOfSingularValues(a, f);
