@@ -27,6 +27,11 @@ function globalName(registers: readonly Register[], names: readonly string[], in
  * @throws RangeError for malformed IR: non-finite angles or powers, names that are not identifiers.
  */
 export function writeQasm(circuit: Circuit): string {
+  return writeQasmNamed(circuit).text;
+}
+
+/** writeQasm's text with the register names it chose, in the circuit's register order (a clashing name gets its suffix). */
+export function writeQasmNamed(circuit: Circuit): { readonly text: string; readonly qubitRegisterNames: readonly string[]; readonly bitRegisterNames: readonly string[] } {
   const definitions = new QasmDefinitions();
   const qubitNames = circuit.qubitRegisters.map((r) => definitions.reserve(r.name));
   const bitNames = circuit.bitRegisters.map((r) => definitions.reserve(r.name));
@@ -50,5 +55,5 @@ export function writeQasm(circuit: Circuit): string {
     ...circuit.bitRegisters.map((r, k) => `bit[${r.size}] ${bitNames[k] as string};`),
   ];
   const sections = [['OPENQASM 3.0;', 'include "stdgates.inc";'].join('\n'), ...definitions.texts, declarations.join('\n'), body.join('\n')];
-  return sections.filter((s) => s !== '').join('\n\n') + '\n';
+  return { text: sections.filter((s) => s !== '').join('\n\n') + '\n', qubitRegisterNames: qubitNames, bitRegisterNames: bitNames };
 }

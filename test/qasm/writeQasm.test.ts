@@ -7,7 +7,7 @@ import { CircuitBuilder } from '../../src/circuit/CircuitBuilder.js';
 import { gate } from '../../src/circuit/ops.js';
 import type { Circuit, GateOp } from '../../src/circuit/types.js';
 import { parseQasm } from '../../src/qasm/parseQasm.js';
-import { writeQasm } from '../../src/qasm/writeQasm.js';
+import { writeQasm, writeQasmNamed } from '../../src/qasm/writeQasm.js';
 import { GOLDEN_CIRCUITS } from './goldenCircuits.js';
 
 const golden = (name: string): string => readFileSync(new URL(`../../circuits/golden/${name}.qasm`, import.meta.url), 'utf8');
@@ -63,6 +63,9 @@ describe('writeQasm(circuit)', () => {
     const text = writeQasm(b.build());
     expect(text).toContain('qubit[1] x_2;\nqubit[1] pi_2;\n');
     expect(text).toContain('cx x_2[0], pi_2[0];');
+    const named = writeQasmNamed(b.build());
+    expect(named.text).toBe(text);
+    expect(named.qubitRegisterNames).toEqual(parseQasm(text, 'clash.qasm').qubitRegisters.map((r) => r.name));
   });
 
   it('throws RangeError for a NaN or infinite angle (a programming error, not input)', () => {

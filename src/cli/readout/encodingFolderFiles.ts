@@ -7,8 +7,7 @@ import { ancillaQubits } from '../../blocks/BlockEncoding.js';
 import { CircuitBuilder } from '../../circuit/CircuitBuilder.js';
 import { call } from '../../circuit/ops.js';
 import { operatorFileJson } from '../../operatorFile/operatorFileJson.js';
-import { parseQasm } from '../../qasm/parseQasm.js';
-import { writeQasm } from '../../qasm/writeQasm.js';
+import { writeQasmNamed } from '../../qasm/writeQasm.js';
 import { DEFAULT_EXHAUSTIVE_LIMIT } from '../../verify/verifyCircuit.js';
 import type { ReadoutEncoding } from './readoutEncodings.js';
 
@@ -61,10 +60,11 @@ function rendered(item: ReadoutEncoding): { qasm: string; entry: EncodingManifes
   const builder = new CircuitBuilder();
   const qubits = [...builder.qubits('system', encoding.systemQubits), ...encoding.ancillas.flatMap((r) => builder.qubits(r.name, r.size))];
   builder.add(call(encoding.block, qubits));
-  const qasm = writeQasm(builder.build());
+  const circuit = builder.build();
+  const { text: qasm, qubitRegisterNames } = writeQasmNamed(circuit);
   const file = `${item.stem}.qasm`;
   // The writer renames a register that clashes with an OpenQASM word; the command names the registers as written.
-  const written = parseQasm(qasm, file).qubitRegisters.map((r) => ({ name: r.name, qubits: r.size }));
+  const written = circuit.qubitRegisters.map((r, k) => ({ name: qubitRegisterNames[k]!, qubits: r.size }));
   const system = written[0]!;
   const ancillas = written.slice(1);
   const signal = ancillas.filter((_, k) => encoding.ancillas[k]!.role === 'signal');
