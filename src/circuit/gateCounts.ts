@@ -106,6 +106,11 @@ export function expandedGateTotal(circuit: Circuit): number {
   return opsTotal(circuit.ops.filter((op): op is UnitaryOp => op.kind === 'gate' || op.kind === 'call'));
 }
 
+/** Number of primitive gates one application of `block` expands to: totalGates(blockCounts(block)) without the kinds. */
+export function blockGateTotal(block: Block): number {
+  return callTotal(block, 1);
+}
+
 /** Sum of all counts. */
 export function totalGates(counts: GateCounts): number {
   let total = 0;

@@ -33,6 +33,11 @@ export function defaultOverrideRules(options: OverrideRuleOptions = {}): Overrid
   return rules;
 }
 
+/** What defaultOverrideRules reads from `options`, as a key: equal keys, equal rules. */
+export function overrideRulesKey(options: OverrideRuleOptions = {}): string {
+  return `${options.unaryIteration ?? true}:${options.gidneyAdder ?? false}:${options.multiControl ?? 'measured'}`;
+}
+
 function callsOf(block: Block): UnitaryOp[] {
   return block.body.kind === 'plain' ? [...block.body.ops] : [...block.body.compute, ...block.body.action];
 }

@@ -17,11 +17,11 @@ import { MIN_PRECISION } from '../resolvent/planResolvent.js';
 import { resolventCost, type ResolventCost } from '../resolvent/resolventCost.js';
 import type { ResolventRoute } from '../resolvent/ResolventReport.js';
 import { UnreachablePrecisionError } from '../resolvent/UnreachablePrecisionError.js';
-import { collectOverrides, defaultOverrideRules, type OverrideRuleOptions } from './collectOverrides.js';
+import type { OverrideRuleOptions } from './collectOverrides.js';
+import { controlledCount } from './controlledCount.js';
 import type { DecompositionOptions } from './decompositionTable.js';
 import type { ResolventBuilder, RouteResolvent } from './greenCost.js';
 import { resourceTotals } from './resourceTotals.js';
-import { structuredBlockCounts } from './structuredCounts.js';
 
 export type RouteName = ResolventRoute;
 
@@ -48,10 +48,7 @@ const REPLAN_MARGIN = 0.98;
 
 /** Toffolis of one controlled application, with the same overrides and decompositions as the cost itself. */
 function toffoliCounter(settings: RouteSettings): (encoding: BlockEncoding) => number {
-  return (encoding) => {
-    const overrides = collectOverrides([encoding.block], defaultOverrideRules(settings));
-    return resourceTotals(structuredBlockCounts(encoding.block, overrides, { controls: 1 }), settings).toffoli;
-  };
+  return (encoding) => resourceTotals(controlledCount(encoding.block, settings), settings).toffoli;
 }
 
 function plan(model: FermionModel, w: ComplexScalar, route: RouteName, options: RouteOptions, settings: RouteSettings): ResolventCost {

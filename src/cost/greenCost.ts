@@ -10,13 +10,13 @@ import { ladderEncoding } from '../blocks/builders/ladderEncoding.js';
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { FermionModel } from '../model/FermionModel.js';
 import type { BEncodingReport } from '../resolvent/ResolventReport.js';
-import { collectOverrides, defaultOverrideRules, type OverrideRuleOptions } from './collectOverrides.js';
+import type { OverrideRuleOptions } from './collectOverrides.js';
+import { controlledCount } from './controlledCount.js';
 import type { DecompositionOptions } from './decompositionTable.js';
 import { errorBudget, type ErrorBudget } from './errorBudget.js';
 import { sumCounts } from './HierarchyCount.js';
 import { resourceTotals, type ResourceTotals } from './resourceTotals.js';
 import { shotCount } from './shotCount.js';
-import { structuredBlockCounts } from './structuredCounts.js';
 
 /** What a route's resolvent builder returns: the encoding of (w − H)⁻¹ plus what it knows of its own construction, or why it has none. */
 export type RouteResolvent = BuiltResolvent | UnavailableRoute;
@@ -113,9 +113,8 @@ function partCost(part: 'particle' | 'hole', w: ComplexScalar, electrons: number
   const first = part === 'particle' ? ladderEncoding(i, false, model.modes) : ladderEncoding(j, true, model.modes);
   const last = part === 'particle' ? ladderEncoding(j, true, model.modes) : ladderEncoding(i, false, model.modes);
   const roots = [encoding.block, first.block, last.block];
-  const overrides = collectOverrides(roots, defaultOverrideRules(options));
   // The test: controlled (first · R · last) = three controlled calls; ladder encodings have α = 1.
-  const count = sumCounts(roots.map((block) => [structuredBlockCounts(block, overrides, { controls: 1 }), 1] as const));
+  const count = sumCounts(roots.map((block) => [controlledCount(block, options), 1] as const));
   const unsynthesised = resourceTotals(count, options);
   const alpha = encoding.alpha * first.alpha * last.alpha;
   const rotationError = unsynthesised.rotations === 0 ? 0.25 : Math.min(0.25, budget.synthesisPerPart / (alpha * unsynthesised.rotations));

@@ -6,31 +6,61 @@
  */
 import type { Block, Circuit, UnitaryOp } from '../circuit/types.js';
 import type { OverrideTable } from './CostOverride.js';
-import { EMPTY_COUNT, sumCounts, type HierarchyCount, type KindCount } from './HierarchyCount.js';
-import { kindKey, structuredGateKind } from './structuredGateKind.js';
+import { EMPTY_COUNT, sumCounts, type HierarchyCount } from './HierarchyCount.js';
+import { invertedKind, kindKey, structuredGateKind, type StructuredGateKind } from './structuredGateKind.js';
+
+interface KindEntry {
+  kind: StructuredGateKind;
+  count: number;
+}
+
+/** The gate part counted inverted: every kind inverted (a bijection on keys, so groups and their order are kept). */
+function invertedGates(gates: ReadonlyMap<string, KindEntry>): Map<string, KindEntry> {
+  const inverted = new Map<string, KindEntry>();
+  for (const entry of gates.values()) {
+    const kind = invertedKind(entry.kind);
+    inverted.set(kindKey(kind), { kind, count: entry.count });
+  }
+  return inverted;
+}
 
 class Counter {
   private readonly memo = new Map<Block, Map<string, HierarchyCount>>();
+  /**
+   * The gate part (gates of the list itself, not of called blocks) per op list and modifiers: a list counted under the same
+   * controls but the other inverse flag (an action and its adjoint, e.g. inside a QSVT sequence) is then derived, not recounted.
+   */
+  private readonly gateParts = new WeakMap<readonly UnitaryOp[], Map<string, ReadonlyMap<string, KindEntry>>>();
 
   constructor(private readonly overrides: OverrideTable) {}
 
   ops(ops: readonly UnitaryOp[], controls: number, negControls: number, inverse: boolean): HierarchyCount {
+    let byModifiers = this.gateParts.get(ops);
+    if (!byModifiers) this.gateParts.set(ops, (byModifiers = new Map()));
+    const mirrored = byModifiers.get(`${controls}:${negControls}:${!inverse}`);
     const parts: (readonly [HierarchyCount, number])[] = [];
-    const gates = new Map<string, KindCount>();
+    // Entries are updated in place: one lookup per gate. The entry keeps the last gate's kind, as a replaced entry would.
+    const gates = mirrored ? invertedGates(mirrored) : new Map<string, KindEntry>();
     for (const op of ops) {
       const c = controls + op.controls.length;
       const n = negControls + op.negControls.length;
       const inv = inverse !== op.inverse;
       if (op.kind === 'gate') {
+        if (mirrored) continue;
         const kind = structuredGateKind(op.name, op.params, c, n, inv, op.power);
         const key = kindKey(kind);
-        gates.set(key, { kind, count: (gates.get(key)?.count ?? 0) + 1 });
+        const entry = gates.get(key);
+        if (entry) {
+          entry.kind = kind;
+          entry.count += 1;
+        } else gates.set(key, { kind, count: 1 });
       } else if (op.power !== 0) {
         const blockInverse = op.power < 0 ? !inv : inv;
         const times = Math.abs(op.power);
         parts.push(...this.applications(op.block, c, n, blockInverse, times));
       }
     }
+    byModifiers.set(`${controls}:${negControls}:${inverse}`, gates);
     if (gates.size > 0) parts.push([{ kinds: gates, charges: new Map() }, 1]);
     return parts.length === 0 ? EMPTY_COUNT : parts.length === 1 && parts[0]![1] === 1 ? parts[0]![0] : sumCounts(parts);
   }

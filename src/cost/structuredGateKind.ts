@@ -67,8 +67,19 @@ function classify(name: string, params: readonly Angle[], power: number): { fami
 }
 
 /**
+ * Kinds already made, by name, power, then controls, negative controls, inverse and the two angle levels packed in one
+ * integer (family depends on name and power alone): a counter asks for the same few kinds once per gate, ~10^5 times.
+ */
+const made = new Map<string, Map<number, Map<number, StructuredGateKind>>>();
+/** The kindKey of every kind made here, built once: a Map hashes a flat string once, a fresh concatenation every time. */
+const keys = new WeakMap<StructuredGateKind, string>();
+/** Control counts below this are packed; larger ones (never seen in practice) are not memoised. */
+const PACKED_CONTROLS = 2 ** 16;
+
+/**
  * The structured kind of gate `name` with angle parameters `params` under `extraControls` positive and `negControls`
- * negative controls (beyond its built-in ones), inverted or not, raised to `power`.
+ * negative controls (beyond its built-in ones), inverted or not, raised to `power`. Equal inputs give the same object
+ * (kinds are read-only).
  * @throws RangeError for a name that is not a standard gate.
  */
 export function structuredGateKind(
@@ -82,20 +93,78 @@ export function structuredGateKind(
   const gate = standardGate(name);
   if (!gate) throw new RangeError(`structuredGateKind: "${name}" is not a standard gate`);
   const { family, angle } = classify(name, params, power);
+  const level = angleLevel(angle);
+  const halfLevel = angleLevel(angle === null ? null : angle / 2);
+  return kindOf(name, gate.controls, extraControls, negControls, inverse, power, family, level, halfLevel);
+}
+
+/**
+ * The kind of the same gate inverted: equal to structuredGateKind(name, params, …, !inverse, power) for the params `kind`
+ * was made from (inverting changes neither the family nor the angle levels).
+ */
+export function invertedKind(kind: StructuredGateKind): StructuredGateKind {
+  const builtIn = standardGate(kind.name)!.controls;
+  return kindOf(kind.name, builtIn, kind.controls - builtIn, kind.negControls, !kind.inverse, kind.power, kind.family, kind.angle, kind.halfAngle);
+}
+
+function kindOf(
+  name: string,
+  builtInControls: number,
+  extraControls: number,
+  negControls: number,
+  inverse: boolean,
+  power: number,
+  family: GateFamily,
+  level: AngleLevel,
+  halfLevel: AngleLevel,
+): StructuredGateKind {
+  const packable =
+    Number.isInteger(extraControls) && Number.isInteger(negControls) && extraControls >= 0 && negControls >= 0 &&
+    extraControls < PACKED_CONTROLS && negControls < PACKED_CONTROLS && !Object.is(power, -0);
+  if (!packable) return makeKind(name, builtInControls, extraControls, negControls, inverse, power, family, level, halfLevel);
+  const packed = ((extraControls * PACKED_CONTROLS + negControls) * 2 + (inverse ? 1 : 0)) * 25 + level * 5 + halfLevel;
+  let byPower = made.get(name);
+  if (!byPower) made.set(name, (byPower = new Map()));
+  let byRest = byPower.get(power);
+  if (!byRest) byPower.set(power, (byRest = new Map()));
+  let kind = byRest.get(packed);
+  if (!kind) {
+    kind = makeKind(name, builtInControls, extraControls, negControls, inverse, power, family, level, halfLevel);
+    byRest.set(packed, kind);
+    keys.set(kind, keyOf(kind));
+  }
+  return kind;
+}
+
+function makeKind(
+  name: string,
+  builtInControls: number,
+  extraControls: number,
+  negControls: number,
+  inverse: boolean,
+  power: number,
+  family: GateFamily,
+  angle: AngleLevel,
+  halfAngle: AngleLevel,
+): StructuredGateKind {
   return {
     name,
-    controls: gate.controls + extraControls,
+    controls: builtInControls + extraControls,
     negControls,
     inverse,
     power,
     family,
-    angle: angleLevel(angle),
-    halfAngle: angleLevel(angle === null ? null : angle / 2),
+    angle,
+    halfAngle,
     display: gateKind(name, extraControls, negControls, inverse, power),
   };
 }
 
+function keyOf(kind: StructuredGateKind): string {
+  return `${kind.display}|${kind.angle}${kind.halfAngle}`;
+}
+
 /** The map key of a kind: the display string plus the angle levels (two gates with one display may cost differently). */
 export function kindKey(kind: StructuredGateKind): string {
-  return `${kind.display}|${kind.angle}${kind.halfAngle}`;
+  return keys.get(kind) ?? keyOf(kind);
 }

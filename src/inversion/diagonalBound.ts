@@ -31,17 +31,28 @@ export function diagonalTermsOfB(model: FermionModel): DiagonalTerms | { readonl
   return terms;
 }
 
+/** Bounds already computed, per model and window: the preconditioned plan and diagonalEncoding both ask for them. */
+const boundsPerModel = new WeakMap<FermionModel, Map<string, DiagonalBound>>();
+
 /**
  * @param electrons N or [Nmin, Nmax]; omitted: the whole Fock space.
+ * @returns the same (read-only) object for the same model and window.
  * @throws RangeError for a window outside 0…modes.
  */
 export function diagonalBound(model: FermionModel, electrons?: number | readonly [number, number]): DiagonalBound | { readonly notDiagonal: string } {
   const terms = diagonalTermsOfB(model);
   if ('notDiagonal' in terms) return terms;
   const [min, max] = electrons === undefined ? [0, model.modes] : typeof electrons === 'number' ? [electrons, electrons] : electrons;
+  let known = boundsPerModel.get(model);
+  if (!known) boundsPerModel.set(model, (known = new Map()));
+  const key = `${min}:${max}`;
+  const cached = known.get(key);
+  if (cached) return cached;
   const window = { min, max };
   const range = diagonalRange(terms.single, terms.pairs, window);
   const low = terms.constant + range.low;
   const high = terms.constant + range.high;
-  return { terms, window, low, high, shift: (low + high) / 2, beta: (high - low) / 2 };
+  const bound = { terms, window, low, high, shift: (low + high) / 2, beta: (high - low) / 2 };
+  known.set(key, bound);
+  return bound;
 }

@@ -7,7 +7,7 @@
 import { defineConjugatedBlock } from '../circuit/defineBlock.js';
 import { gate } from '../circuit/ops.js';
 import type { UnitaryOp } from '../circuit/types.js';
-import { blockCounts, totalGates } from '../circuit/gateCounts.js';
+import { blockGateTotal } from '../circuit/gateCounts.js';
 import { memoiseMatrix, type AncillaRegister, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import { multiplexedRotation } from '../blocks/multiplexedRotation.js';
 import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
@@ -158,7 +158,7 @@ export function diagonalEncoding(model: FermionModel, options: DiagonalEncodingO
   if (adder === 'ripple') ancillas.push({ name: 'adder_scratch', size: scratch.length, role: 'clean' }, { name: 'adder_carry', size: 1, role: 'clean' });
   const termCount = activeModes.length + activePairs.length;
   const rounding = grid.rounding / beta;
-  const floatingPoint = FLOATING_POINT_FACTOR * 2 ** -53 * (totalGates(blockCounts(block)) + termCount + 2 ** m);
+  const floatingPoint = FLOATING_POINT_FACTOR * 2 ** -53 * (blockGateTotal(block) + termCount + 2 ** m);
   return {
     label: options.label ?? "B' (diagonal, arithmetic)",
     block,

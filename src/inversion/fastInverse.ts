@@ -9,7 +9,7 @@ import { memoiseMatrix, type AncillaRegister, type BlockEncoding } from '../bloc
 import type { ComplexScalar } from '../linalg/ComplexScalar.js';
 import type { ComplexMatrix } from '../linalg/ComplexMatrix.js';
 import { oneBodyRotation, type OneBodyRotationOptions } from '../rotations/oneBodyRotation.js';
-import { blockCounts, totalGates } from '../circuit/gateCounts.js';
+import { blockGateTotal } from '../circuit/gateCounts.js';
 import { energyGrid, type Window } from './internal/energyGrid.js';
 import { weightedSumOps } from './internal/energyArithmetic.js';
 import { electronWindowOps } from './internal/electronWindowOps.js';
@@ -200,7 +200,7 @@ export function fastInverse(T: ComplexMatrix, w: ComplexScalar, options: FastInv
     compute,
     flagOps.ops,
   );
-  const floatingPoint = floatingPointTerm(totalGates(blockCounts(block)), T, energies.gap);
+  const floatingPoint = floatingPointTerm(blockGateTotal(block), T, energies.gap);
   const quantisationBound = energies.rounding + energies.decomposition + flagOps.piecewiseError + floatingPoint;
   return {
     label,

@@ -40,6 +40,7 @@ export function hermitianEigen(a: ComplexMatrix, options: HermitianEigenOptions 
       im[i * n + j] = (a.im[i * n + j]! - a.im[j * n + i]!) / 2;
     }
   }
+  // V is kept transposed (row k of vr, vi is column k of V): its updates then run along rows, not down strided columns.
   const vr = new Float64Array(n * n);
   const vi = new Float64Array(n * n);
   for (let i = 0; i < n; i++) vr[i * n + i] = 1;
@@ -71,7 +72,7 @@ function sweepOnce(re: Float64Array, im: Float64Array, vr: Float64Array, vi: Flo
 }
 
 /**
- * A ← J† A J, V ← V J with J = diag(1, e^{−iφ}) · [[c, s], [−s, c]] on (p, q), φ = arg a_pq:
+ * A ← J† A J, V ← V J (V stored transposed) with J = diag(1, e^{−iφ}) · [[c, s], [−s, c]] on (p, q), φ = arg a_pq:
  * the phase makes a_pq real (= g), the real rotation then zeroes it.
  */
 function rotate(re: Float64Array, im: Float64Array, vr: Float64Array, vi: Float64Array, n: number, p: number, q: number, g: number): void {
@@ -88,20 +89,28 @@ function rotate(re: Float64Array, im: Float64Array, vr: Float64Array, vi: Float6
   const qpi = s * ei;
   const qqr = c * er;
   const qqi = -c * ei;
-  const columns = (xr: Float64Array, xi: Float64Array): void => {
-    for (let r = 0; r < n; r++) {
-      const ar = xr[r * n + p]!;
-      const ai = xi[r * n + p]!;
-      const br = xr[r * n + q]!;
-      const bi = xi[r * n + q]!;
-      xr[r * n + p] = c * ar + br * qpr - bi * qpi;
-      xi[r * n + p] = c * ai + br * qpi + bi * qpr;
-      xr[r * n + q] = s * ar + br * qqr - bi * qqi;
-      xi[r * n + q] = s * ai + br * qqi + bi * qqr;
-    }
-  };
-  columns(re, im);
-  columns(vr, vi);
+  // Columns p, q of A.
+  for (let r = 0; r < n; r++) {
+    const ar = re[r * n + p]!;
+    const ai = im[r * n + p]!;
+    const br = re[r * n + q]!;
+    const bi = im[r * n + q]!;
+    re[r * n + p] = c * ar + br * qpr - bi * qpi;
+    im[r * n + p] = c * ai + br * qpi + bi * qpr;
+    re[r * n + q] = s * ar + br * qqr - bi * qqi;
+    im[r * n + q] = s * ai + br * qqi + bi * qqr;
+  }
+  // Columns p, q of V are rows p, q of its transpose; the same formulas.
+  for (let r = 0; r < n; r++) {
+    const ar = vr[p * n + r]!;
+    const ai = vi[p * n + r]!;
+    const br = vr[q * n + r]!;
+    const bi = vi[q * n + r]!;
+    vr[p * n + r] = c * ar + br * qpr - bi * qpi;
+    vi[p * n + r] = c * ai + br * qpi + bi * qpr;
+    vr[q * n + r] = s * ar + br * qqr - bi * qqi;
+    vi[q * n + r] = s * ai + br * qqi + bi * qqr;
+  }
   for (let r = 0; r < n; r++) {
     const ar = re[p * n + r]!;
     const ai = im[p * n + r]!;
@@ -126,8 +135,8 @@ function sorted(re: Float64Array, vr: Float64Array, vi: Float64Array, n: number)
   const outIm = new Float64Array(n * n);
   order.forEach((k, col) => {
     for (let r = 0; r < n; r++) {
-      outRe[r * n + col] = vr[r * n + k]!;
-      outIm[r * n + col] = vi[r * n + k]!;
+      outRe[r * n + col] = vr[k * n + r]!;
+      outIm[r * n + col] = vi[k * n + r]!;
     }
   });
   return { values, vectors: { n, re: outRe, im: outIm } };

@@ -3,8 +3,8 @@
  * vega-lite compiled to vega and rendered server side like lineChartSvg. Same input, same bytes; every route its own
  * colour (distinctColors).
  */
-import * as vega from 'vega';
-import { compile, type TopLevelSpec } from 'vega-lite';
+import type { TopLevelSpec } from 'vega-lite';
+import { renderVegaLiteSvg } from './renderVegaLiteSvg.js';
 import { distinctColors } from './distinctColors.js';
 
 export interface CostSeries {
@@ -37,8 +37,5 @@ export async function costChartSvg(chart: CostChart): Promise<string> {
       color: { field: 'route', type: 'nominal', title: 'route', scale: { domain: routes, range: distinctColors(routes.length) } },
     },
   };
-  const view = new vega.View(vega.parse(compile(spec).spec), { renderer: 'none' });
-  const svg = await view.toSVG();
-  view.finalize();
-  return svg;
+  return renderVegaLiteSvg(spec);
 }

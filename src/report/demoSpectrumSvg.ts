@@ -3,8 +3,8 @@
  * point shape and size per route — as SVG text, drawn with vega-lite compiled to vega and rendered server side (like
  * lineChartSvg). Same input, same bytes.
  */
-import * as vega from 'vega';
-import { compile, type TopLevelSpec } from 'vega-lite';
+import type { TopLevelSpec } from 'vega-lite';
+import { renderVegaLiteSvg } from './renderVegaLiteSvg.js';
 
 export interface SpectrumPoints {
   /** Legend entry, e.g. "gate level, preconditioned route". */
@@ -66,8 +66,5 @@ export async function demoSpectrumSvg(chart: DemoSpectrum): Promise<string> {
       },
     ],
   };
-  const view = new vega.View(vega.parse(compile(spec).spec), { renderer: 'none' });
-  const svg = await view.toSVG();
-  view.finalize();
-  return svg;
+  return renderVegaLiteSvg(spec);
 }

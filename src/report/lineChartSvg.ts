@@ -4,8 +4,8 @@
  * group gets its own colour (distinctColors), never one shared with another group of the chart;
  * series of one group are told apart by line style.
  */
-import * as vega from 'vega';
-import { compile, type TopLevelSpec } from 'vega-lite';
+import type { TopLevelSpec } from 'vega-lite';
+import { renderVegaLiteSvg } from './renderVegaLiteSvg.js';
 import { distinctColors } from './distinctColors.js';
 
 export interface LineSeries {
@@ -73,8 +73,5 @@ export async function lineChartSvg(chart: LineChart): Promise<string> {
           }),
     },
   };
-  const view = new vega.View(vega.parse(compile(spec).spec), { renderer: 'none' });
-  const svg = await view.toSVG();
-  view.finalize();
-  return svg;
+  return renderVegaLiteSvg(spec);
 }

@@ -24,7 +24,6 @@
  * UnreachablePrecisionError either way.
  */
 import type { BlockEncoding } from '../blocks/BlockEncoding.js';
-import { modelEncodings, type ModelEncodings } from '../blocks/builders/modelEncodings.js';
 import { identityEncoding } from '../blocks/combine/identityEncoding.js';
 import { linearCombination } from '../blocks/combine/linearCombination.js';
 import { productEncoding } from '../blocks/combine/productEncoding.js';
@@ -104,16 +103,19 @@ export interface ResolventPlan {
 }
 
 const POLYNOMIAL_SHARE = 0.99;
-/** Smallest ε planned for: QSP phases reach residuals of ~1e-14 and the polynomial's error is measured to ~1e-12. */
+/** Smallest ε planned for: QSP phases reach residuals of ~1e-14 and the polynomial's certified error ~1e-12. */
 export const MIN_PRECISION = 1e-10;
 
-/** The model's Pauli-LCU encodings (H, A, B) per model: they do not depend on w or ε, so repeated plans build them once. */
-const encodingsPerModel = new WeakMap<FermionModel, ModelEncodings>();
+/**
+ * The model's Pauli-LCU encoding of H (the direct route's; modelEncodings builds it the same way) per model: it does not
+ * depend on w or ε, so repeated plans build it once, and A's and B's LCUs, which no plan uses, are not built.
+ */
+const hamiltonianPerModel = new WeakMap<FermionModel, BlockEncoding>();
 
-function encodingsOf(model: FermionModel): ModelEncodings {
-  let encodings = encodingsPerModel.get(model);
-  if (!encodings) encodingsPerModel.set(model, (encodings = modelEncodings(model)));
-  return encodings;
+function hamiltonianOf(model: FermionModel): BlockEncoding {
+  let encoding = hamiltonianPerModel.get(model);
+  if (!encoding) hamiltonianPerModel.set(model, (encoding = pauliLcu(jordanWigner(modelHamiltonian(model, { part: 'all' }), model.modes), 'H')));
+  return encoding;
 }
 
 /** B without its identity part: the encoding of B' = B − b₀I and the shift b₀ (real, B being Hermitian). */
@@ -172,7 +174,7 @@ export function planResolvent(model: FermionModel, w: ComplexScalar, options: Re
   const eta = Math.abs(w.im);
   if (options.route === 'direct') {
     // directShift's construction (w·I − H by shiftedEncoding) on the model's H built once.
-    const M = shiftedEncoding(encodingsOf(model).H, w, 'w - H');
+    const M = shiftedEncoding(hamiltonianOf(model), w, 'w - H');
     const { K, source, aPriori } = conditionOf(1 / eta, options, caller, true);
     if (!(1 / (M.alpha * K) - M.errorBound > 0)) {
       // Only for absurd shifts (|w| near the double range): 1/(α_M K) underflows.

@@ -1,8 +1,10 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { CircuitBuilder } from '../../src/circuit/CircuitBuilder.js';
 import { call, gate } from '../../src/circuit/ops.js';
 import { defineBlock, defineConjugatedBlock } from '../../src/circuit/defineBlock.js';
-import { blockCounts, countsToObject, gateCounts, totalGates } from '../../src/circuit/gateCounts.js';
+import { blockCounts, blockGateTotal, countsToObject, gateCounts, totalGates } from '../../src/circuit/gateCounts.js';
+import { arbitraryBlockPool } from '../helpers/arbitraryCircuit.js';
 import { depthBound } from '../../src/circuit/depthBound.js';
 import { flatten } from '../../src/circuit/flatten.js';
 
@@ -136,5 +138,16 @@ describe('defineBlock(options, ops)', () => {
     expect(() => defineBlock({ name: 'bad', role: '', qubits: 2 }, [gate('cx', [1, 1])])).toThrow(RangeError);
     expect(() => defineBlock({ name: 'cx', role: '', qubits: 2 }, [])).toThrow(RangeError);
     expect(() => defineBlock({ name: 'ok', role: '', qubits: 1 }, [gate('rx', [0])])).toThrow(/parameters/);
+  });
+});
+
+describe('blockGateTotal(block)', () => {
+  it('equals the sum of blockCounts over every kind for random block hierarchies', () => {
+    fc.assert(
+      fc.property(arbitraryBlockPool(4, 4), (pool) => {
+        for (const block of pool) expect(blockGateTotal(block)).toBe(totalGates(blockCounts(block)));
+      }),
+      { numRuns: 100 },
+    );
   });
 });

@@ -158,3 +158,36 @@ describe('known constructions', () => {
     expect(rippleClean.toffoli).toBe(pairs.length * (2 * width - 2 + 2));
   });
 });
+
+describe('structuredBlockCounts of a block called both ways', () => {
+  it('counts the adjoint of a gate list, derived from the list counted the other way, as counting it afresh does (same kinds in the same order)', () => {
+    const gatesArb = fc.array(
+      fc.record({
+        name: fc.constantFrom('ry', 'rz', 's', 't', 'x', 'h', 'cx', 'p'),
+        angle: fc.oneof(fc.constant(Math.PI / 4), fc.double({ min: -3, max: 3, noNaN: true })),
+        control: fc.boolean(),
+        power: fc.constantFrom(1, 2, -1),
+      }),
+      { minLength: 1, maxLength: 12 },
+    );
+    fc.assert(
+      fc.property(gatesArb, fc.integer({ min: 0, max: 2 }), (gates, extra) => {
+        const ops = gates.map(({ name, angle, control, power }) => {
+          const params = ['ry', 'rz', 'p'].includes(name) ? [angle] : [];
+          const qubits = name === 'cx' ? [1, 2] : [1];
+          return gate(name, qubits, params, { ...(control ? { controls: [0] } : {}), power });
+        });
+        const list = defineBlock({ name: 'list', role: 'gates', qubits: 3 }, ops);
+        const both = defineBlock({ name: 'both', role: 'list, then its adjoint', qubits: 3 }, [call(list, [0, 1, 2]), call(list, [0, 1, 2], [], { inverse: true })]);
+        const shared = structuredBlockCounts(both, new WeakMap(), { controls: extra });
+        const separate = sumCounts([
+          [structuredBlockCounts(list, new WeakMap(), { controls: extra }), 1],
+          [structuredBlockCounts(list, new WeakMap(), { controls: extra, inverse: true }), 1],
+        ]);
+        const entries = (count: HierarchyCount) => [...count.kinds].map(([key, entry]) => [key, entry.kind, entry.count]);
+        expect(entries(shared)).toEqual(entries(separate));
+      }),
+      { numRuns: 150 },
+    );
+  });
+});

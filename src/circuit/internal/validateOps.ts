@@ -13,13 +13,43 @@ function checkAngles(angles: readonly Angle[], paramCount: number, where: string
   }
 }
 
+/** Per qubit, the number of the check that last saw it (grown as needed): a repeat is a qubit already stamped by this check. */
+let stamps = new Int32Array(64);
+let check = 0;
+
+/** Scopes wider than this are checked with a Set instead of the stamps. */
+const MAX_STAMPED_QUBITS = 2 ** 20;
+
+/** Whether an operand occurs twice across the lists (all in range 0 … qubitCount − 1): one pass, no allocation. */
+function hasRepeat(lists: readonly (readonly number[])[], qubitCount: number): boolean {
+  if (qubitCount > MAX_STAMPED_QUBITS) {
+    const all = lists.flat();
+    return new Set(all).size !== all.length;
+  }
+  if (stamps.length < qubitCount) stamps = new Int32Array(Math.max(qubitCount, 2 * stamps.length));
+  if (check === 2 ** 31 - 1) {
+    stamps.fill(0);
+    check = 0;
+  }
+  check += 1;
+  for (const list of lists) {
+    for (const q of list) {
+      if (stamps[q] === check) return true;
+      stamps[q] = check;
+    }
+  }
+  return false;
+}
+
 /** Throws a RangeError when `op` is malformed in a scope of `qubitCount` qubits and `paramCount` parameters. */
 export function validateUnitaryOp(op: UnitaryOp, qubitCount: number, paramCount: number, where: string): void {
-  const all = [...op.controls, ...op.negControls, ...op.qubits];
-  for (const q of all) {
-    if (!Number.isInteger(q) || q < 0 || q >= qubitCount) throw new RangeError(`${where}: qubit ${q} out of range 0..${qubitCount - 1}`);
+  const lists = [op.controls, op.negControls, op.qubits];
+  for (const list of lists) {
+    for (const q of list) {
+      if (!Number.isInteger(q) || q < 0 || q >= qubitCount) throw new RangeError(`${where}: qubit ${q} out of range 0..${qubitCount - 1}`);
+    }
   }
-  if (new Set(all).size !== all.length) throw new RangeError(`${where}: repeated qubit operand in ${JSON.stringify(all)}`);
+  if (hasRepeat(lists, qubitCount)) throw new RangeError(`${where}: repeated qubit operand in ${JSON.stringify(lists.flat())}`);
   if (!Number.isFinite(op.power)) throw new RangeError(`${where}: power must be finite`);
   if (op.kind === 'gate') {
     const definition = standardGate(op.name);

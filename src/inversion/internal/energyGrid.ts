@@ -2,7 +2,7 @@
 // range of Σ a_k n_k in the electron-number window, the register width — chosen so that the register's rounding and an
 // inexact diagonalisation stay within the precision asked for, with the energies every register value stands for.
 import { registerEnergies, type RegisterEnergies } from './flagAmplitude.js';
-import { registerHull } from './registerHull.js';
+import { cachedRegisterHull } from './cachedRegisterHull.js';
 import type { ComplexScalar } from '../../linalg/ComplexScalar.js';
 
 export interface EnergyGrid {
@@ -41,7 +41,7 @@ export interface GridTarget {
 }
 
 const COMMENSURATE_TOLERANCE = 1e-12;
-/** Largest (N, partial sum) table registerHull may fill: 2^22 entries (64 MiB for its two tables). */
+/** Largest (N, partial sum) rectangle registerHull's table may span: 2^22 entries (its triangular rows fill at most 64 MiB). */
 const HULL_TABLE_LIMIT = 2 ** 22;
 
 function rangeOf(weights: readonly number[], window: Window): { sumMin: number; sumMax: number } {
@@ -84,7 +84,7 @@ function layoutFor(energies: Float64Array, window: Window, step: number, offset:
 }
 
 function complete(energies: Float64Array, window: Window, layout: Layout, target: GridTarget, capped: boolean): EnergyGrid {
-  const hull = registerHull(energies, layout.weights, window, layout.sumMin, layout.sumMax - layout.sumMin);
+  const hull = cachedRegisterHull(energies, layout.weights, window, layout.sumMin, layout.sumMax - layout.sumMin);
   const values = registerEnergies(hull, target.w, target.rho);
   return { ...layout, commensurate: values.exact, capped, values };
 }

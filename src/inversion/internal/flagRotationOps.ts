@@ -6,6 +6,7 @@ import type { UnitaryOp } from '../../circuit/types.js';
 import { multiplexedRotation } from '../../blocks/multiplexedRotation.js';
 import { flagAngles, occupied, type RegisterEnergies } from './flagAmplitude.js';
 import { flagIntervals } from './flagIntervals.js';
+import { controlListsFor } from './flagControlLists.js';
 
 export interface FlagRotation {
   readonly ops: UnitaryOp[];
@@ -43,16 +44,16 @@ export function flagRotationOps(
   }
   const intervals = flagIntervals(energies, m, budget);
   const ops: UnitaryOp[] = [...outside];
+  // Every rotation acts on the flag alone: one operand list serves them all (ops are never changed after construction).
+  const target = [flag];
+  const controlLists = controlListsFor(energies, register, gateControls);
+  let piecewiseError = 0;
   for (const interval of intervals) {
-    const controls = [...gateControls];
-    const negControls: number[] = [];
-    for (let b = interval.level; b < m; b++) {
-      if (Math.floor(interval.start / 2 ** b) % 2 === 1) controls.push(register[b]!);
-      else negControls.push(register[b]!);
-    }
+    const { controls, negControls } = controlLists(interval.start, interval.level);
     const { theta, lambda } = flagAngles(energies, interval.representative);
-    if (theta !== 0) ops.push(gate('ry', [flag], [theta], { controls, negControls }));
-    if (lambda !== 0) ops.push(gate('rz', [flag], [lambda], { controls, negControls }));
+    if (theta !== 0) ops.push(gate('ry', target, [theta], { controls, negControls }));
+    if (lambda !== 0) ops.push(gate('rz', target, [lambda], { controls, negControls }));
+    piecewiseError = Math.max(piecewiseError, interval.error);
   }
-  return { ops, rotations: intervals.length, piecewiseError: Math.max(0, ...intervals.map((i) => i.error)) };
+  return { ops, rotations: intervals.length, piecewiseError };
 }

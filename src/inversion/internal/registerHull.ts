@@ -10,57 +10,90 @@ export interface RegisterHull {
   readonly high: Float64Array;
 }
 
+const EMPTY_LOW = 2 ** 31 - 1;
+
+/**
+ * One mode added to one electron count: every reached cell first … last of the (N)-row, raised by `shift` cells into the
+ * (N + 1)-row, offers its energies plus e. In its own function so that the engine compiles the loop on its own.
+ */
+function addMode(low: Float64Array, high: Float64Array, first: number, last: number, shift: number, e: number): void {
+  for (let i = last; i >= first; i--) {
+    const l = low[i]!;
+    if (l === Infinity) continue;
+    const j = i + shift;
+    if (l + e < low[j]!) low[j] = l + e;
+    const h = high[i]! + e;
+    if (h > high[j]!) high[j] = h;
+  }
+}
+
 /**
  * Partial sums use the shifted weights a_k − min_k a_k ≥ 0, so an N-electron partial sum lies in 0 … N·span; the
- * table holds the least and greatest energy per (N, partial sum), modes added one at a time (0/1 knapsack order).
+ * tables hold the least and greatest energy per (N, partial sum), modes added one at a time (0/1 knapsack order).
+ * Row N holds N·span + 1 cells; a cell is initialised when the row's reachable range first covers it, so cells no
+ * partial sum reaches are never touched.
  */
 export function registerHull(energies: Float64Array, weights: readonly number[], window: Window, sumMin: number, top: number): RegisterHull {
   const n = energies.length;
   const aMin = n === 0 ? 0 : Math.min(...weights);
-  const shifted = weights.map((a) => a - aMin);
+  const shifted = Int32Array.from(weights, (a) => a - aMin);
   const span = Math.max(0, ...shifted);
   const maxN = window.max;
-  const width = maxN * span + 1;
-  ensureFits(2 * 8 * (maxN + 1) * width + 2 * 8 * (top + 1), 'fast inverse register energies');
-  const low = new Float64Array((maxN + 1) * width).fill(Infinity);
-  const high = new Float64Array((maxN + 1) * width).fill(-Infinity);
+  const start = (N: number): number => (span * N * (N - 1)) / 2 + N;
+  const cells = start(maxN + 1);
+  ensureFits(2 * 8 * cells + 2 * 8 * (top + 1), 'fast inverse register energies');
+  // Int32 offsets keep the sweep's indices integers (what fits in memory has far fewer than 2^31 cells).
+  const rowStart = Int32Array.from({ length: maxN + 2 }, (_, N) => start(N));
+  const low = new Float64Array(cells);
+  const high = new Float64Array(cells);
+  // Reachable partial sums after the modes so far: for N electrons, reachLow[N] … reachHigh[N] (empty: EMPTY_LOW … −1).
+  // Only those cells are swept, and only electron counts that can still end inside the window (N + modes left ≥ min).
+  const reachLow = new Int32Array(maxN + 1).fill(EMPTY_LOW);
+  const reachHigh = new Int32Array(maxN + 1).fill(-1);
   low[0] = 0;
   high[0] = 0;
-  // Reachable partial sums after the modes so far: for N electrons, reachLow[N] … reachHigh[N] (empty when low > high).
-  // Only those cells are swept, and only electron counts that can still end inside the window (N + modes left ≥ min).
-  const reachLow = new Float64Array(maxN + 1).fill(Infinity);
-  const reachHigh = new Float64Array(maxN + 1).fill(-Infinity);
   reachLow[0] = 0;
   reachHigh[0] = 0;
+  const clear = (from: number, to: number): void => {
+    low.fill(Infinity, from, to);
+    high.fill(-Infinity, from, to);
+  };
   for (let k = 0; k < n; k++) {
     const a = shifted[k]!;
     const e = energies[k]!;
     const lowestN = Math.max(0, window.min - (n - k));
     for (let N = Math.min(k, maxN - 1); N >= lowestN; N--) {
-      if (reachLow[N]! > reachHigh[N]!) continue;
-      const from = N * width;
-      const to = (N + 1) * width + a;
-      for (let s = reachHigh[N]!; s >= reachLow[N]!; s--) {
-        const l = low[from + s]!;
-        if (l === Infinity) continue;
-        if (l + e < low[to + s]!) low[to + s] = l + e;
-        const h = high[from + s]! + e;
-        if (h > high[to + s]!) high[to + s] = h;
+      const first = reachLow[N]!;
+      const last = reachHigh[N]!;
+      if (first > last) continue;
+      const row = rowStart[N]!;
+      const next = rowStart[N + 1]!;
+      const oldLow = reachLow[N + 1]!;
+      const oldHigh = reachHigh[N + 1]!;
+      const newLow = Math.min(oldLow, first + a);
+      const newHigh = Math.max(oldHigh, last + a);
+      if (oldLow > oldHigh) clear(next + newLow, next + newHigh + 1);
+      else {
+        clear(next + newLow, next + oldLow);
+        clear(next + oldHigh + 1, next + newHigh + 1);
       }
-      reachLow[N + 1] = Math.min(reachLow[N + 1]!, reachLow[N]! + a);
-      reachHigh[N + 1] = Math.max(reachHigh[N + 1]!, reachHigh[N]! + a);
+      addMode(low, high, row + first, row + last, next + a - row, e);
+      reachLow[N + 1] = newLow;
+      reachHigh[N + 1] = newHigh;
     }
   }
   const outLow = new Float64Array(top + 1).fill(Number.NaN);
   const outHigh = new Float64Array(top + 1).fill(Number.NaN);
   for (let N = window.min; N <= window.max; N++) {
+    const row = rowStart[N]!;
     for (let s = Math.max(0, reachLow[N]!); s <= Math.min(N * span, reachHigh[N]!); s++) {
-      const l = low[N * width + s]!;
+      const l = low[row + s]!;
       if (l === Infinity) continue;
+      const h = high[row + s]!;
       const v = s + N * aMin - sumMin;
       if (v < 0 || v > top) throw new RangeError(`registerHull: value ${v} outside 0…${top}`);
       outLow[v] = Number.isNaN(outLow[v]!) ? l : Math.min(outLow[v]!, l);
-      outHigh[v] = Number.isNaN(outHigh[v]!) ? high[N * width + s]! : Math.max(outHigh[v]!, high[N * width + s]!);
+      outHigh[v] = Number.isNaN(outHigh[v]!) ? h : Math.max(outHigh[v]!, h);
     }
   }
   return { low: outLow, high: outHigh };
