@@ -34,7 +34,7 @@ export interface RouteOptions {
 
 /** How the routes are set up beyond the model and shift. */
 export interface RouteSettings extends DecompositionOptions, OverrideRuleOptions {
-  /** B' of the preconditioned route: 'cheaper' (default; fewer Toffolis per application), 'pauli' or 'arithmetic'. */
+  /** B' of the preconditioned route: 'cheaper' (default; fewer Toffolis per application × α², i.e. over all shots), 'pauli' or 'arithmetic'. */
   readonly bEncoding?: 'pauli' | 'arithmetic' | 'cheaper';
   /** The preconditioned route's electron-number window on the resolvent's sector (default true); false: the whole Fock space. */
   readonly window?: boolean;

@@ -7,8 +7,9 @@
  * encoding is the built route's circuit — qsvtInverseStructure of M (the real QSVT sequence with placeholder phases),
  * times F on the preconditioned route, exactly as resolventEncoding composes it — for counting only: exact() throws.
  * `bEncoding: 'cheaper'` costs the preconditioned route with B' as the Pauli LCU and as the arithmetic encoding (when B is
- * diagonal) and keeps the one whose whole circuit has fewer Toffolis per application, counted by the caller's `countToffoli`
- * (the cost stage's counter; this stage does not count); a route that cannot be planned one way is costed the other way.
+ * diagonal) and keeps the one whose readout needs fewer Toffolis in all — Toffolis per application, counted by the caller's
+ * `countToffoli` (the cost stage's counter; this stage does not count), times α², to which the shots are proportional; a
+ * route that cannot be planned one way is costed the other way.
  */
 import { ancillaQubits, type BlockEncoding } from '../blocks/BlockEncoding.js';
 import { productEncoding } from '../blocks/combine/productEncoding.js';
@@ -54,7 +55,10 @@ export function resolventCost(model: FermionModel, w: ComplexScalar, options: Re
   const arithmetic = pauli instanceof UnreachablePrecisionError || (pauli.report.bEncoding?.alphaArithmetic ?? null) !== null ? attempt('arithmetic') : null;
   const usable = (c: ResolventCost | UnreachablePrecisionError | null): c is ResolventCost => c !== null && !(c instanceof UnreachablePrecisionError);
   const toffoli = { pauli: usable(pauli) ? countToffoli(pauli.encoding) : null, arithmetic: usable(arithmetic) && arithmetic.report.bEncoding?.used === 'arithmetic' ? countToffoli(arithmetic.encoding) : null };
-  const pick = toffoli.arithmetic !== null && (toffoli.pauli === null || toffoli.arithmetic < toffoli.pauli) ? arithmetic : pauli;
+  // Sampling needs shots ∝ α² (the Hadamard test reads G/α), so the whole readout costs ∝ Toffolis per application × α².
+  const total = (count: number | null, cost: ResolventCost | UnreachablePrecisionError | null): number =>
+    count === null || !usable(cost) ? Number.POSITIVE_INFINITY : count * cost.report.alphas.total ** 2;
+  const pick = total(toffoli.arithmetic, arithmetic) < total(toffoli.pauli, pauli) ? arithmetic : pauli;
   if (!usable(pick)) throw pauli;
   return { ...pick, report: { ...pick.report, bEncoding: { ...pick.report.bEncoding!, toffoli } } };
 }

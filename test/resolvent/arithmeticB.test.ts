@@ -68,4 +68,16 @@ describe("resolventCost with bEncoding 'cheaper'", () => {
     expect(more.used).toBe(smaller === 'pauli' ? 'arithmetic' : 'pauli');
     expect(() => resolventCost(model, w, { ...options, bEncoding: 'cheaper' })).toThrow(/countToffoli/);
   });
+
+  it('weighs each count by α² (the shots the readout needs): fewer Toffolis per application lose to a smaller α', () => {
+    const model = { ...hubbard({ sites: 2, hopping: 1, interaction: 4, chemicalPotential: 2 }), electrons: 2 };
+    const w = { re: 1, im: 0.1 };
+    const options = { route: 'preconditioned' as const, precision: 1e-2, electrons: 3, reachablePrecision: true };
+    // 1/α per application: the larger α has fewer, but 1/α · α² = α over all shots favours the smaller α.
+    const chosen = resolventCost(model, w, { ...options, bEncoding: 'cheaper', countToffoli: (e) => 1 / e.alpha });
+    const pauli = resolventCost(model, w, { ...options, bEncoding: 'pauli' }).report.alphas.total;
+    const arithmetic = resolventCost(model, w, { ...options, bEncoding: 'arithmetic' }).report.alphas.total;
+    expect(pauli).not.toBe(arithmetic);
+    expect(chosen.report.bEncoding!.used).toBe(pauli < arithmetic ? 'pauli' : 'arithmetic');
+  });
 });

@@ -230,7 +230,7 @@ export function registerCostCommand(program: Command): void {
     .option('--prep-toffoli <N>', 'Toffolis of one ground-state preparation (default: not counted)')
     .option('--toffoli-t <4|7>', 'T gates per Toffoli', '4')
     .option('--multi-control <method>', 'multi-controlled X: measured, clean or dirty', 'measured')
-    .option('--b-encoding <kind>', "B' of the preconditioned route: pauli, arithmetic (B diagonal) or cheaper (fewer Toffolis)", 'cheaper')
+    .option('--b-encoding <kind>', "B' of the preconditioned route: pauli, arithmetic (B diagonal) or cheaper (fewer Toffolis over all shots)", 'cheaper')
     .option('--whole-fock', 'preconditioned route on the whole Fock space (no electron-number window)')
     .option('--json', 'print { "preconditioned": {...}, "direct": {...} }')
     .option('--vary <KEY=v1,v2,...>', 'rerun over values of one model parameter; needs --out')
