@@ -1,10 +1,11 @@
 #!/usr/bin/env node
 /**
- * The `polewright` command: builds the program from the command modules and maps failures to
- * exit codes (0 success, 2 bad input or usage, 1 internal error). No stack trace for user mistakes.
+ * The `polewright` command: builds the program from the command module it runs (all of them for help, version or a
+ * mistyped name) and maps failures to exit codes (0 success, 2 bad input or usage, 1 internal error). No stack trace
+ * for user mistakes.
  */
 import { CommanderError } from 'commander';
-import { buildProgram } from './program.js';
+import { programFor } from './programShell.js';
 import { isInputError } from '../core/InputError.js';
 
 // A reader that closes the pipe early (`polewright … --json | head`) ends the command quietly, not with a stack trace.
@@ -14,7 +15,7 @@ process.stdout.on('error', (error: NodeJS.ErrnoException) => {
 });
 
 async function main(argv: string[]): Promise<number> {
-  const program = buildProgram();
+  const program = (await programFor(argv[2])) ?? (await import('./program.js')).buildProgram();
   try {
     await program.parseAsync(argv);
     return 0;

@@ -1,9 +1,9 @@
 /**
- * buildProgram: the commander program with every subcommand registered.
- * Each command lives in its own file under commands/ and exports one `register…` function.
+ * buildProgram: the commander program with every subcommand registered (the command line registers only the one it
+ * runs, programShell.programFor). Each command lives in its own file under commands/ and exports one `register…` function.
  */
-import { Command } from 'commander';
-import { VERSION } from '../core/version.js';
+import type { Command } from 'commander';
+import { programShell } from './programShell.js';
 import { registerCheckCommand } from './commands/check.js';
 import { registerCostCommand } from './commands/cost.js';
 import { registerExactCommand } from './commands/exact.js';
@@ -14,14 +14,7 @@ import { registerBuildCommand } from './commands/build.js';
 import { registerDemoCommand } from './commands/demo.js';
 
 export function buildProgram(): Command {
-  const program = new Command();
-  program
-    .name('polewright')
-    .description("Quantum circuits for many-body Green's functions: synthesize, simulate, export, cost.")
-    .version(VERSION)
-    .exitOverride()
-    .showHelpAfterError(false)
-    .configureOutput({ writeErr: (text) => process.stderr.write(text) });
+  const program = programShell();
   registerRunCommand(program);
   registerCheckCommand(program);
   registerExactCommand(program);
