@@ -89,28 +89,9 @@ function rotate(re: Float64Array, im: Float64Array, vr: Float64Array, vi: Float6
   const qpi = s * ei;
   const qqr = c * er;
   const qqi = -c * ei;
-  // Columns p, q of A.
-  for (let r = 0; r < n; r++) {
-    const ar = re[r * n + p]!;
-    const ai = im[r * n + p]!;
-    const br = re[r * n + q]!;
-    const bi = im[r * n + q]!;
-    re[r * n + p] = c * ar + br * qpr - bi * qpi;
-    im[r * n + p] = c * ai + br * qpi + bi * qpr;
-    re[r * n + q] = s * ar + br * qqr - bi * qqi;
-    im[r * n + q] = s * ai + br * qqi + bi * qqr;
-  }
-  // Columns p, q of V are rows p, q of its transpose; the same formulas.
-  for (let r = 0; r < n; r++) {
-    const ar = vr[p * n + r]!;
-    const ai = vi[p * n + r]!;
-    const br = vr[q * n + r]!;
-    const bi = vi[q * n + r]!;
-    vr[p * n + r] = c * ar + br * qpr - bi * qpi;
-    vi[p * n + r] = c * ai + br * qpi + bi * qpr;
-    vr[q * n + r] = s * ar + br * qqr - bi * qqi;
-    vi[q * n + r] = s * ai + br * qqi + bi * qqr;
-  }
+  // Columns p, q of A, and of V (rows p, q of its transpose).
+  timesJ(re, im, p, q, n, n, c, s, qpr, qpi, qqr, qqi);
+  timesJ(vr, vi, p * n, q * n, 1, n, c, s, qpr, qpi, qqr, qqi);
   for (let r = 0; r < n; r++) {
     const ar = re[p * n + r]!;
     const ai = im[p * n + r]!;
@@ -126,6 +107,28 @@ function rotate(re: Float64Array, im: Float64Array, vr: Float64Array, vi: Float6
   re[q * n + q] = aqq + t * g;
   im[p * n + p] = im[q * n + q] = 0;
   re[p * n + q] = re[q * n + p] = im[p * n + q] = im[q * n + p] = 0;
+}
+
+/**
+ * The pair of vectors x (entries first + k·stride) and y (second + k·stride), k < n, replaced by x·J_pp + y·J_qp and
+ * x·J_pq + y·J_qq, J_pp = c, J_pq = s and J_qp = qpr + i·qpi, J_qq = qqr + i·qqi: two columns of a matrix times J.
+ */
+function timesJ(
+  re: Float64Array, im: Float64Array, first: number, second: number, stride: number, n: number,
+  c: number, s: number, qpr: number, qpi: number, qqr: number, qqi: number,
+): void {
+  for (let k = 0; k < n; k++) {
+    const x = first + k * stride;
+    const y = second + k * stride;
+    const ar = re[x]!;
+    const ai = im[x]!;
+    const br = re[y]!;
+    const bi = im[y]!;
+    re[x] = c * ar + br * qpr - bi * qpi;
+    im[x] = c * ai + br * qpi + bi * qpr;
+    re[y] = s * ar + br * qqr - bi * qqi;
+    im[y] = s * ai + br * qqi + bi * qqr;
+  }
 }
 
 function sorted(re: Float64Array, vr: Float64Array, vi: Float64Array, n: number): HermitianEigen {
