@@ -1,28 +1,16 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { pauliLcu } from '../../src/blocks/builders/pauliLcu.js';
-import type { ComplexMatrix } from '../../src/linalg/ComplexMatrix.js';
 import { matrixMultiply } from '../../src/linalg/matrixMultiply.js';
 import { qsvtEncoding } from '../../src/qsvt/qsvtEncoding.js';
 import { resolventEncoding } from '../../src/resolvent/resolventEncoding.js';
 import { qsvtSubspaceBlock, subspaceColumns } from '../../src/verify/qubitizedColumns.js';
 import { sectorStates } from '../../src/verify/inversionCheckItems.js';
 import { expectComplexArrayClose } from '../helpers/close.js';
+import { subMatrix } from '../helpers/complexMatrixOps.js';
 import { hubbard } from '../helpers/models.js';
 import { pauliSumArb } from '../helpers/operatorArbitraries.js';
 import { projectedBlock } from '../qsvt/projectedBlock.js';
-
-/** Rows and columns `states` of a dense matrix. */
-function restrict(M: ComplexMatrix, states: readonly number[]): ComplexMatrix {
-  const m = states.length;
-  const re = new Float64Array(m * m);
-  const im = new Float64Array(m * m);
-  states.forEach((i, r) => states.forEach((j, c) => {
-    re[r * m + c] = M.re[i * M.n + j]!;
-    im[r * m + c] = M.im[i * M.n + j]!;
-  }));
-  return { n: m, re, im };
-}
 
 describe('qsvtSubspaceBlock (the qubitized evaluation of a QSVT sequence)', () => {
   it('equals the full gate-level simulation of the sequence on random small encodings, odd and even degree, random phases', () => {
@@ -54,7 +42,7 @@ describe('qsvtSubspaceBlock (the qubitized evaluation of a QSVT sequence)', () =
         expect(F.leak).toBeLessThan(1e-12);
         block = matrixMultiply(block, F.block);
       }
-      expectComplexArrayClose(block, restrict(projectedBlock(encoding, states), states), 1e-10, route);
+      expectComplexArrayClose(block, subMatrix(projectedBlock(encoding, states), states), 1e-10, route);
     }
   });
 
